@@ -1,0 +1,201 @@
+// Writes what follows mechanically from the function catalogue:
+//   solarith-codegen idl   -> the UNO interface (checked in as idl/XSolarith.idl)
+//   solarith-codegen glue  -> the add-in's method bodies (included by addin.cpp)
+//   solarith-codegen docs  -> the function reference (checked in as docs/functions.md)
+// The build compiles the checked-in IDL and regenerates the glue; the tests
+// fail when the checked-in files and the catalogue disagree.
+#include "solarith/catalog.hpp"
+#include "solarith/errors.hpp"
+
+#include <iostream>
+#include <set>
+#include <string>
+
+using namespace solarith::catalog;
+
+namespace {
+
+// Words UNO IDL reserves; an argument so named gets a trailing underscore.
+bool is_idl_keyword(std::string_view word)
+{
+    static const std::set<std::string_view> keywords = {
+        "any", "attribute", "boolean", "byte", "char", "const", "constants", "double", "enum",
+        "exception", "float", "get", "hyper", "in", "inout", "interface", "long", "module",
+        "oneway", "out", "property", "published", "raises", "readonly", "sequence", "service",
+        "set", "short", "singleton", "string", "struct", "type", "typedef", "unsigned", "void"};
+    return keywords.count(word) > 0;
+}
+
+// UNO IDL identifiers take no underscores: "T_inner" becomes "tInner".
+std::string idl_parameter_name(std::string_view name)
+{
+    std::string out = programmatic_name(name);
+    if (is_idl_keyword(out))
+        out += '_';
+    return out;
+}
+
+const char* idl_type(ArgKind kind)
+{
+    switch (kind) {
+    case ArgKind::Number: return "double";
+    case ArgKind::Text: return "string";
+    case ArgKind::OptionalNumber:
+    case ArgKind::OptionalText: return "any";
+    case ArgKind::Range: return "sequence< sequence< any > >";
+    case ArgKind::Rest: return "sequence< any >";
+    }
+    return "?";
+}
+
+const char* cpp_type(ArgKind kind)
+{
+    switch (kind) {
+    case ArgKind::Number: return "double";
+    case ArgKind::Text: return "const ::rtl::OUString&";
+    case ArgKind::OptionalNumber:
+    case ArgKind::OptionalText: return "const css::uno::Any&";
+    case ArgKind::Range: return "const css::uno::Sequence< css::uno::Sequence< css::uno::Any > >&";
+    case ArgKind::Rest: return "const css::uno::Sequence< css::uno::Any >&";
+    }
+    return "?";
+}
+
+const char* converter(ArgKind kind)
+{
+    switch (kind) {
+    case ArgKind::Number: return "from_double";
+    case ArgKind::Text: return "from_text";
+    case ArgKind::OptionalNumber:
+    case ArgKind::OptionalText: return "from_any";
+    case ArgKind::Range: return "from_range";
+    case ArgKind::Rest: return "";
+    }
+    return "?";
+}
+
+void write_idl(std::ostream& out)
+{
+    out << "// Generated from the Solarith function catalogue by solarith-codegen; do not edit.\n"
+           "// Regenerate with: cmake --build build --target regenerate\n"
+           "// The method names are stored in saved documents: never rename one.\n\n"
+           "module org { module solarith {\n\n"
+           "interface XSolarith : com::sun::star::uno::XInterface\n{\n";
+    for (const auto& f : functions()) {
+        out << "    // " << f.name << "\n    " << (f.result == ResultKind::Number ? "double" : "string") << ' '
+            << programmatic_name(f.name) << '(';
+        for (std::size_t i = 0; i < f.args.size(); ++i)
+            out << (i ? ", " : "") << "[in] " << idl_type(f.args[i].kind) << ' ' << idl_parameter_name(f.args[i].name);
+        out << ")\n        raises (com::sun::star::lang::IllegalArgumentException,"
+               " com::sun::star::sheet::NoConvergenceException);\n";
+    }
+    out << "};\n\n}; };\n";
+}
+
+void write_glue(std::ostream& out)
+{
+    out << "// Generated from the Solarith function catalogue by solarith-codegen; do not edit.\n";
+    const auto& all = functions();
+    for (std::size_t index = 0; index < all.size(); ++index) {
+        const auto& f = all[index];
+        const bool number = f.result == ResultKind::Number;
+        out << (number ? "double" : "::rtl::OUString") << " SAL_CALL " << programmatic_name(f.name) << '(';
+        for (std::size_t i = 0; i < f.args.size(); ++i)
+            out << (i ? ", " : "") << cpp_type(f.args[i].kind) << " a" << i;
+        out << ") override\n{\n    return " << (number ? "number_result" : "text_result") << '(' << index
+            << ", [&] { return ";
+        const bool has_rest = !f.args.empty() && f.args.back().kind == ArgKind::Rest;
+        out << (has_rest ? "with_rest(Values{" : "Values{");
+        for (std::size_t i = 0; i < f.args.size(); ++i)
+            if (f.args[i].kind != ArgKind::Rest)
+                out << (i ? ", " : "") << converter(f.args[i].kind) << "(a" << i << ')';
+        out << '}';
+        if (has_rest)
+            out << ", a" << f.args.size() - 1 << ')';
+        out << "; });\n}\n";
+    }
+}
+
+std::string markdown_escape(std::string_view text)
+{
+    std::string out;
+    for (char c : text) {
+        if (c == '|')
+            out += '\\';
+        out += c;
+    }
+    return out;
+}
+
+std::string anchor(std::string_view name)
+{
+    std::string out;
+    for (char c : name)
+        out += static_cast<char>(c == '_' ? '_' : std::tolower(static_cast<unsigned char>(c)));
+    return out;
+}
+
+std::string example_result(const FunctionSpec& f)
+{
+    const Result result = evaluate(f, parse_arguments(f.example));
+    if (const double* number = std::get_if<double>(&result))
+        return solarith::format_number(*number) + (f.result_unit == "–" ? "" : " " + std::string(f.result_unit));
+    return "\"" + std::get<std::string>(result) + "\"";
+}
+
+void write_docs(std::ostream& out)
+{
+    out << "# Solarith function reference\n\n"
+           "Generated from the function catalogue (`core/catalog/`) by `solarith-codegen docs`; do not edit.\n"
+           "Regenerate with `cmake --build build --target regenerate`. The same texts appear in Calc's\n"
+           "function wizard and through `FN_METHOD`.\n\n"
+           "Conventions: temperatures in °C (differences in K), SI units otherwise; optional arguments in\n"
+           "square brackets. Bad input gives Err:502, a solver that fails gives Err:523;\n"
+           "`FN_DIAGNOSE(\"NAME\"; arguments…)` says why.\n";
+    std::string family;
+    for (const auto& f : functions()) {
+        if (f.family != family) {
+            family = f.family;
+            out << "\n## " << family << "\n\n| function | result |\n|---|---|\n";
+            for (const auto& g : functions())
+                if (g.family == family)
+                    out << "| [" << g.name << "](#" << anchor(g.name) << ") | " << markdown_escape(g.result_unit)
+                        << " |\n";
+        }
+        out << "\n### " << f.name << "\n\n`" << f.name << '(';
+        const std::size_t required = required_count(f);
+        for (std::size_t i = 0; i < f.args.size(); ++i) {
+            const bool optional = i >= required && f.args[i].kind != ArgKind::Rest;
+            out << (i ? "; " : "") << (optional ? "[" : "") << f.args[i].name
+                << (f.args[i].kind == ArgKind::Rest ? "…" : "") << (optional ? "]" : "");
+        }
+        out << ")` → " << f.result_unit << "\n\n" << function_help(f) << "\n\n";
+        if (!f.args.empty()) {
+            out << "| argument | unit | description |\n|---|---|---|\n";
+            for (const auto& a : f.args)
+                out << "| " << a.name << " | " << markdown_escape(a.unit.empty() ? "text" : a.unit) << " | "
+                    << markdown_escape(argument_help(a)) << " |\n";
+            out << '\n';
+        }
+        out << "Method: " << f.method << "\n\nExample: `=" << f.name << '(' << f.example << ")` → "
+            << example_result(f) << "\n";
+    }
+}
+
+}  // namespace
+
+int main(int argc, char** argv)
+{
+    const std::string what = argc > 1 ? argv[1] : "";
+    if (what == "idl")
+        write_idl(std::cout);
+    else if (what == "glue")
+        write_glue(std::cout);
+    else if (what == "docs")
+        write_docs(std::cout);
+    else {
+        std::cerr << "usage: solarith-codegen idl|glue|docs\n";
+        return 2;
+    }
+    return std::cout.good() ? 0 : 1;
+}
