@@ -2,6 +2,7 @@
 //   solarith-codegen idl   -> the UNO interface (checked in as idl/XSolarith.idl)
 //   solarith-codegen glue  -> the add-in's method bodies (included by addin.cpp)
 //   solarith-codegen docs  -> the function reference (checked in as docs/functions.md)
+//   solarith-codegen names|examples -> lists the tests compare with Calc and the type library
 // The build compiles the checked-in IDL and regenerates the glue; the tests
 // fail when the checked-in files and the catalogue disagree.
 #include "solarith/catalog.hpp"
@@ -94,7 +95,9 @@ void write_idl(std::ostream& out)
 
 void write_glue(std::ostream& out)
 {
-    out << "// Generated from the Solarith function catalogue by solarith-codegen; do not edit.\n";
+    out << "// Generated from the Solarith function catalogue by solarith-codegen; do not edit.\n"
+           "// An error \"marked 'override', but does not override\" below means idl/XSolarith.idl is\n"
+           "// older than the catalogue: run cmake --build build --target regenerate\n";
     const auto& all = functions();
     for (std::size_t index = 0; index < all.size(); ++index) {
         const auto& f = all[index];
@@ -182,6 +185,34 @@ void write_docs(std::ostream& out)
     }
 }
 
+// One line per function: display name, programmatic name, argument count,
+// the wizard's function description, then each argument's name, unit and description.
+void write_names(std::ostream& out)
+{
+    for (const auto& f : functions()) {
+        out << f.name << '\t' << programmatic_name(f.name) << '\t' << f.args.size() << '\t' << function_help(f);
+        for (const auto& a : f.args)
+            out << '\t' << a.name << '\t' << a.unit << '\t' << argument_help(a);
+        out << '\n';
+    }
+}
+
+// One line per function: display name, example arguments, the core's result
+// (17 significant digits) -- what the same call must give in Calc.
+void write_examples(std::ostream& out)
+{
+    out.precision(17);
+    for (const auto& f : functions()) {
+        const Result result = evaluate(f, parse_arguments(f.example));
+        out << f.name << '\t' << f.example << '\t';
+        if (const double* number = std::get_if<double>(&result))
+            out << *number;
+        else
+            out << std::get<std::string>(result);
+        out << '\n';
+    }
+}
+
 }  // namespace
 
 int main(int argc, char** argv)
@@ -193,8 +224,12 @@ int main(int argc, char** argv)
         write_glue(std::cout);
     else if (what == "docs")
         write_docs(std::cout);
+    else if (what == "names")
+        write_names(std::cout);
+    else if (what == "examples")
+        write_examples(std::cout);
     else {
-        std::cerr << "usage: solarith-codegen idl|glue|docs\n";
+        std::cerr << "usage: solarith-codegen idl|glue|docs|names|examples\n";
         return 2;
     }
     return std::cout.good() ? 0 : 1;
