@@ -6,6 +6,7 @@
 #include "solarith/errors.hpp"
 
 #include <cctype>
+#include <cstdlib>
 #include <cmath>
 #include <new>
 #include <stdexcept>
@@ -360,9 +361,11 @@ private:
     double number()
     {
         const std::string rest(text_.substr(pos_));
-        std::size_t used = 0;
-        const double value = std::stod(rest, &used);  // throws std::invalid_argument
-        pos_ += used;
+        char* end = nullptr;
+        const double value = std::strtod(rest.c_str(), &end);  // subnormals and overflow are kept, not refused
+        if (end == rest.c_str())
+            throw std::invalid_argument("expected a number in argument list at \"" + rest + "\"");
+        pos_ += static_cast<std::size_t>(end - rest.c_str());
         return value;
     }
 

@@ -112,6 +112,8 @@ TEST_CASE("argument lists parse as in a Calc formula")
     REQUIRE(v[3].table.size() == 2);
     CHECK(v[3].table[1][0].number == 3);
     CHECK_THROWS_AS(parse_arguments("{1; 2"), std::invalid_argument);
+    CHECK_THROWS_AS(parse_arguments("1; x"), std::invalid_argument);
+    CHECK(parse_arguments("4.9e-324")[0].number > 0);  // the smallest subnormal is a number, not an error
 }
 
 TEST_CASE("FN_METHOD and FN_DIAGNOSE read the catalogue")

@@ -2,8 +2,7 @@
 //
 // Source: CODATA 2018 recommended values (Tiesinga, Mohr, Newell & Taylor,
 // Rev. Mod. Phys. 93, 025010, 2021; NIST SP 961, 2019). Since the 2019 SI
-// redefinition h, c and k are exact; sigma, b, c1 and c2 are derived from
-// them and are quoted here to the digits CODATA prints.
+// redefinition h, c and k are exact; sigma, c1 and c2 are computed from them.
 #pragma once
 
 namespace solarith::constants {
@@ -18,19 +17,26 @@ inline constexpr double speed_of_light = 299792458.0;
 // Boltzmann constant k, J/K (exact).
 inline constexpr double boltzmann = 1.380649e-23;
 
-// Stefan–Boltzmann constant sigma, W/(m²·K⁴).
-inline constexpr double stefan_boltzmann = 5.670374419e-8;
-// Wien wavelength displacement law constant b, m·K.
-inline constexpr double wien_displacement = 2.897771955e-3;
+inline constexpr double pi = 3.14159265358979323846;
+
+// The radiation constants follow exactly from h, c and k; computing them here
+// keeps every digit a double holds. They agree with the values CODATA 2018
+// prints (sigma 5.670374419e-8, c1 3.741771852e-16, c2 1.438776877e-2) in
+// every printed digit.
+// Stefan–Boltzmann constant sigma = 2·pi⁵·k⁴/(15·h³·c²), W/(m²·K⁴).
+inline constexpr double stefan_boltzmann = 2 * pi * pi * pi * pi * pi * boltzmann * boltzmann * boltzmann
+                                           * boltzmann
+                                           / (15 * planck * planck * planck * speed_of_light * speed_of_light);
 // First radiation constant for spectral radiant exitance c1 = 2·pi·h·c², W·m².
-inline constexpr double first_radiation = 3.741771852e-16;
+inline constexpr double first_radiation = 2 * pi * planck * speed_of_light * speed_of_light;
 // Second radiation constant c2 = h·c/k, m·K.
-inline constexpr double second_radiation = 1.438776877e-2;
+inline constexpr double second_radiation = planck * speed_of_light / boltzmann;
+// Wien wavelength displacement law constant b, m·K (CODATA 2018 value; the
+// exact one needs the root of x = 5·(1 − e^(−x))).
+inline constexpr double wien_displacement = 2.897771955e-3;
 
 // Standard acceleration of gravity g_n, m/s² (exact, 3rd CGPM 1901).
 inline constexpr double standard_gravity = 9.80665;
-
-inline constexpr double pi = 3.14159265358979323846;
 
 // Absolute temperature in K of a temperature in °C.
 constexpr double kelvin(double t_celsius) { return t_celsius + zero_celsius_in_kelvin; }
