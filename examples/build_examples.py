@@ -40,8 +40,11 @@ class Sheet:
         self.sheet = sheet
         self.row = 0
         self.names = {}
-        for column, width in enumerate((7800, 3200, 2600, 9800)):
+        for column, width in enumerate((7600, 2400, 2000, 6200)):
             sheet.Columns.getByIndex(column).Width = width  # 1/100 mm
+        page = document.StyleFamilies.getByName("PageStyles").getByName(sheet.PageStyle)
+        page.ScaleToPagesX = 1  # print one page wide
+        page.ScaleToPagesY = 0
 
     def _cell(self, column, row=None):
         return self.sheet.getCellByPosition(column, self.row if row is None else row)
@@ -50,13 +53,26 @@ class Sheet:
         cells = self.sheet.getCellRangeByPosition(0, self.row, columns - 1, self.row)
         cells.CellBackColor = colour
 
+    def _full_width(self, text_or_formula, characters_per_line=80):
+        """Text across columns A..D of the current row, wrapped, the row made tall enough."""
+        cells = self.sheet.getCellRangeByPosition(0, self.row, 3, self.row)
+        cells.merge(True)
+        cells.IsTextWrapped = True
+        cell = self._cell(0)
+        if text_or_formula.startswith("="):
+            cell.setFormula(text_or_formula)
+        else:
+            cell.setString(text_or_formula)
+        lines = max(1, -(-len(cell.getString()) // characters_per_line))
+        self.sheet.Rows.getByIndex(self.row).Height = 120 + 420 * lines  # 1/100 mm
+        return cells
+
     def title(self, text, subtitle):
         self._cell(0).setString(text)
         self._cell(0).CharHeight = 14
         self._cell(0).CharWeight = 150  # bold
         self.row += 1
-        self._cell(0).setString(subtitle)
-        self._cell(0).CharPosture = 2  # italic
+        self._full_width(subtitle).CharPosture = 2  # italic
         self.row += 2
 
     def heading(self, text):
@@ -93,25 +109,19 @@ class Sheet:
         self.row += 1
 
     def text_result(self, label, formula):
+        """A label row, then the formula's text across the full width below it."""
         self._row(None, label, "", "", RESULT_COLOUR)
-        self._cell(1).setFormula("=" + formula)
-        cells = self.sheet.getCellRangeByPosition(1, self.row, 3, self.row)
-        cells.merge(True)
-        cells.IsTextWrapped = True
-        self.sheet.Rows.getByIndex(self.row).Height = 1500
+        self.row += 1
+        self.document.calculateAll()  # the text's length sets the row height
+        self._full_width("=" + formula).CellBackColor = RESULT_COLOUR
         self.row += 1
 
     def notes(self, lines):
         self.row += 1
         for line in lines:
-            cell = self._cell(0)
-            cell.setString(line)
-            cell.CharPosture = 2
-            cells = self.sheet.getCellRangeByPosition(0, self.row, 3, self.row)
-            cells.merge(True)
+            cells = self._full_width(line)
+            cells.CharPosture = 2
             cells.CellBackColor = NOTE_COLOUR
-            cells.IsTextWrapped = True
-            self.sheet.Rows.getByIndex(self.row).Height = 900
             self.row += 1
 
     def space(self):
@@ -194,9 +204,9 @@ def quick_check(document):
     s.input("cp_liquid", "Specific heat, liquid", 3000, "J/(kg·K)", "invented")
     s.input("t_melt", "Melting temperature", 58, "°C", "invented")
     s.input("latent", "Latent heat of melting", 230000, "J/kg", "invented")
-    s.result("e_pcm", "Energy stored in the phase-change material", "STORE_PCM({m_pcm};{cp_solid};{cp_liquid};"
+    s.result("e_pcm", "Energy stored in the phase-change store", "STORE_PCM({m_pcm};{cp_solid};{cp_liquid};"
              "{t_melt};{latent};{t_cold};{t_hot})/3.6E6", "kWh", named=True)
-    s.result("ratio", "Phase-change store relative to water, per kg", "({e_pcm}/{m_pcm})/({e_water}/{m_water})", "–",
+    s.result("ratio", "Phase-change store vs water, per kg", "({e_pcm}/{m_pcm})/({e_water}/{m_water})", "–",
              number_format="0.00")
     s.space()
 
