@@ -79,8 +79,8 @@ class Office:
     def own_path(self, name):
         """A path inside the work directory that the office user may write."""
         path = os.path.join(self.workdir, name)
+        os.makedirs(path, exist_ok=True)
         if self.user is not None:
-            os.makedirs(path, exist_ok=True)
             os.chown(path, self.user.pw_uid, self.user.pw_gid)
         return path
 
@@ -94,10 +94,10 @@ class Office:
         # The profile must exist before unopkg registers into it: an office that
         # creates a new profile drops component registrations made before it.
         subprocess.run(self._office_command("--terminate_after_init"), env=self._environment(),
-                       stdin=subprocess.DEVNULL, capture_output=True, timeout=300, check=True)
+                       cwd=self.workdir, stdin=subprocess.DEVNULL, capture_output=True, timeout=300, check=True)
         cmd = self._command([os.path.join(PROGRAM_DIR, "unopkg"), "add", "--suppress-license",
                              self.oxt, "-env:UserInstallation=" + self.profile_url])
-        result = subprocess.run(cmd, env=self._environment(), stdin=subprocess.DEVNULL,
+        result = subprocess.run(cmd, env=self._environment(), cwd=self.workdir, stdin=subprocess.DEVNULL,
                                 capture_output=True, text=True, timeout=300)
         if result.returncode != 0:
             raise RuntimeError("unopkg add failed (%d): %s%s" % (result.returncode, result.stdout, result.stderr))
@@ -110,8 +110,8 @@ class Office:
                 "--accept=socket,host=127.0.0.1,port=%d;urp;StarOffice.ComponentContext" % self.port)
             office_log = os.environ.get("SOLARITH_OFFICE_LOG")  # a file for the office's own messages
             output = open(office_log, "ab") if office_log else subprocess.DEVNULL
-            self.process = subprocess.Popen(cmd, env=self._environment(), stdin=subprocess.DEVNULL,
-                                            stdout=output, stderr=output)
+            self.process = subprocess.Popen(cmd, env=self._environment(), cwd=self.workdir,
+                                            stdin=subprocess.DEVNULL, stdout=output, stderr=output)
             if self._connect():
                 return self
             code = self.process.wait(timeout=60)
@@ -169,8 +169,12 @@ class Office:
         return self.desktop.loadComponentFromURL("private:factory/scalc", "_blank", 0, props(Hidden=True))
 
     def load(self, path):
-        return self.desktop.loadComponentFromURL(uno.systemPathToFileUrl(os.path.abspath(path)), "_blank", 0,
-                                                 props(Hidden=True))
+        """Opens a copy of the document: the office user may not be able to read the checkout."""
+        copy = os.path.join(self.own_path("opened"), os.path.basename(path))
+        if os.path.abspath(path) != copy:
+            shutil.copyfile(path, copy)
+            os.chmod(copy, 0o644)
+        return self.desktop.loadComponentFromURL(uno.systemPathToFileUrl(copy), "_blank", 0, props(Hidden=True))
 
     def store(self, document, path, filter_name):
         """Save a copy: 'calc8' for .ods, 'OpenDocument Spreadsheet Flat XML' for .fods, 'calc_pdf_Export'."""
