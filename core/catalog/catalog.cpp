@@ -399,7 +399,8 @@ const std::vector<FunctionSpec>& functions()
     static const std::vector<FunctionSpec> table = [] {
         std::vector<FunctionSpec> all;
         for (auto family : {radiation_functions, conduction_functions, convection_functions,
-                            storage_functions, audit_functions})
+                            properties_functions, storage_functions, losses_functions, sun_functions,
+                            collector_functions, audit_functions})
             for (auto& f : family())
                 all.push_back(std::move(f));
         return all;

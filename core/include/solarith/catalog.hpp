@@ -141,7 +141,11 @@ std::size_t required_count(const FunctionSpec& spec);
 std::vector<FunctionSpec> radiation_functions();
 std::vector<FunctionSpec> conduction_functions();
 std::vector<FunctionSpec> convection_functions();
+std::vector<FunctionSpec> properties_functions();
 std::vector<FunctionSpec> storage_functions();
+std::vector<FunctionSpec> losses_functions();
+std::vector<FunctionSpec> sun_functions();
+std::vector<FunctionSpec> collector_functions();
 std::vector<FunctionSpec> audit_functions();
 
 }  // namespace solarith::catalog
