@@ -5,7 +5,8 @@
 set -euo pipefail
 
 packages=(g++ make cmake libboost-dev doctest-dev libreoffice-dev python3-uno util-linux
-          fonts-liberation2 poppler-utils)
+          fonts-liberation2 poppler-utils binutils
+          clang libclang-rt-14-dev)  # clang: the sanitizer and fuzzing build of the tests
 # A headless Calc. Keep an installed desktop LibreOffice rather than replace it.
 if dpkg-query -W -f='${Status}' libreoffice-calc 2>/dev/null | grep -q 'install ok installed'; then
   packages+=(libreoffice-calc)

@@ -382,19 +382,19 @@ TEST_CASE("RAD_VF_PERPENDICULAR_RECT: perpendicular rectangles with a common edg
     CHECK(test::call("RAD_VF_PERPENDICULAR_RECT", "1; 1; 1") == test::rel(0.20004377607540316, 1e-14));
     // Summation rule inside a closed box X × Y × Z (view-factor algebra): from the
     // X × Y floor to the ceiling and the four walls, the factors add up to 1.
-    for (auto [x, y, z] : std::initializer_list<Triple>{{1.0, 1.0, 1.0}, {2.0, 0.3, 5.0}, {1e-3, 40.0, 0.7}, {3.0, 3.0, 1e-4}}) {
-        CAPTURE(x);
-        CAPTURE(y);
-        CAPTURE(z);
+    for (const Triple& box : std::initializer_list<Triple>{{1.0, 1.0, 1.0}, {2.0, 0.3, 5.0}, {1e-3, 40.0, 0.7}, {3.0, 3.0, 1e-4}}) {
+        // Plain variables, not structured bindings: clang 14's lambdas (in INFO) cannot capture those.
+        const double x = std::get<0>(box), y = std::get<1>(box), z = std::get<2>(box);
+        INFO("box " << x << " x " << y << " x " << z);
         const double sum = test::call("RAD_VF_PARALLEL_RECT", args(x, y, z))
                            + 2 * test::call("RAD_VF_PERPENDICULAR_RECT", args(x, y, z))
                            + 2 * test::call("RAD_VF_PERPENDICULAR_RECT", args(y, x, z));
         CHECK(sum == test::rel(1.0, 1e-12));
     }
     // Reciprocity A1·F12 = A2·F21 (view-factor algebra), out to the accepted ratio limits.
-    for (auto [w1, w2] : std::initializer_list<std::pair<double, double>>{{0.3, 2.0}, {1e-9, 1.0}, {1e9, 1e-9}, {1e-12, 1e12}, {1e12, 1e12}}) {
-        CAPTURE(w1);
-        CAPTURE(w2);
+    for (const auto& widths : std::initializer_list<std::pair<double, double>>{{0.3, 2.0}, {1e-9, 1.0}, {1e9, 1e-9}, {1e-12, 1e12}, {1e12, 1e12}}) {
+        const double w1 = widths.first, w2 = widths.second;
+        INFO("w1 = " << w1 << ", w2 = " << w2);
         CHECK(w1 * test::call("RAD_VF_PERPENDICULAR_RECT", args(1, w1, w2))
               == test::rel(w2 * test::call("RAD_VF_PERPENDICULAR_RECT", args(1, w2, w1)), 1e-12));
     }
