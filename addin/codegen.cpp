@@ -213,6 +213,18 @@ void write_examples(std::ostream& out)
     }
 }
 
+// One line per function: display name, then one letter per argument kind
+// (N number, n optional number, T text, t optional text, R range, * rest).
+void write_kinds(std::ostream& out)
+{
+    for (const auto& f : functions()) {
+        out << f.name << '\t';
+        for (const auto& a : f.args)
+            out << "NnTtR*"[static_cast<int>(a.kind)];
+        out << '\n';
+    }
+}
+
 }  // namespace
 
 int main(int argc, char** argv)
@@ -228,8 +240,10 @@ int main(int argc, char** argv)
         write_names(std::cout);
     else if (what == "examples")
         write_examples(std::cout);
+    else if (what == "kinds")
+        write_kinds(std::cout);
     else {
-        std::cerr << "usage: solarith-codegen idl|glue|docs|names|examples\n";
+        std::cerr << "usage: solarith-codegen idl|glue|docs|names|examples|kinds\n";
         return 2;
     }
     return std::cout.good() ? 0 : 1;

@@ -26,6 +26,7 @@ from com.sun.star.connection import NoConnectException
 PROGRAM_DIR = "/usr/lib/libreoffice/program"
 RESTART_EXIT_CODE = 81  # soffice.bin asks to be started again after an extension change
 CONNECT_TIMEOUT_S = 120
+EXTENSION_IDENTIFIER = "org.solarith.calc"  # packaging/extension/description.xml.in
 
 
 def props(**values):
@@ -95,13 +96,17 @@ class Office:
         # creates a new profile drops component registrations made before it.
         subprocess.run(self._office_command("--terminate_after_init"), env=self._environment(),
                        cwd=self.workdir, stdin=subprocess.DEVNULL, capture_output=True, timeout=300, check=True)
-        cmd = self._command([os.path.join(PROGRAM_DIR, "unopkg"), "add", "--suppress-license",
-                             self.oxt, "-env:UserInstallation=" + self.profile_url])
+        self._unopkg("add", "--suppress-license", self.oxt)
+        return self
+
+    def _unopkg(self, *args):
+        cmd = self._command([os.path.join(PROGRAM_DIR, "unopkg")] + list(args)
+                            + ["-env:UserInstallation=" + self.profile_url])
         result = subprocess.run(cmd, env=self._environment(), cwd=self.workdir, stdin=subprocess.DEVNULL,
                                 capture_output=True, text=True, timeout=300)
         if result.returncode != 0:
-            raise RuntimeError("unopkg add failed (%d): %s%s" % (result.returncode, result.stdout, result.stderr))
-        return self
+            raise RuntimeError("unopkg %s failed (%d): %s%s" % (args[0], result.returncode, result.stdout,
+                                                                result.stderr))
 
     def start(self):
         for _attempt in range(3):
@@ -140,20 +145,32 @@ class Office:
     def alive(self):
         return self.process is not None and self.process.poll() is None
 
+    def shutdown(self):
+        """Ends the office process (by its own pid if it does not quit); keeps the profile."""
+        if self.process is None:
+            return
+        try:
+            if self.desktop is not None and self.alive():
+                self.desktop.terminate()
+        except Exception:  # the bridge goes down with the office; nothing to report
+            pass
+        try:
+            self.process.wait(timeout=30)
+        except subprocess.TimeoutExpired:
+            self.process.kill()
+            self.process.wait(timeout=30)
+        self.process = None
+        self.context = None
+        self.desktop = None
+
     def stop(self):
-        if self.process is not None:
-            try:
-                if self.desktop is not None and self.alive():
-                    self.desktop.terminate()
-            except Exception:  # the bridge goes down with the office; nothing to report
-                pass
-            try:
-                self.process.wait(timeout=30)
-            except subprocess.TimeoutExpired:
-                self.process.kill()
-                self.process.wait(timeout=30)
-            self.process = None
+        self.shutdown()
         shutil.rmtree(self.workdir, ignore_errors=True)
+
+    def uninstall(self):
+        """Removes the extension from the profile (the office must be shut down)."""
+        self._unopkg("remove", EXTENSION_IDENTIFIER)
+        return self
 
     def __enter__(self):
         return self.install().start()

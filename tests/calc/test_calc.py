@@ -8,24 +8,11 @@ Reference values with their outside sources are in reference_cases.tsv.
 """
 import math
 import os
-import subprocess
-import sys
 import unittest
 import zipfile
 
-SOURCE = os.environ["SOLARITH_SOURCE_DIR"]
-sys.path.insert(0, os.path.join(SOURCE, "packaging"))
-from office import Office  # noqa: E402
-
-# Calc's error codes as XCell.getError() reports them, and as cells show them.
-ERROR_TEXT = {502: "Err:502", 503: "#NUM!", 504: "Err:504", 519: "#VALUE!", 523: "Err:523", 525: "#NAME?",
-              32767: "#N/A"}
-ERROR_CODE = {text: code for code, text in ERROR_TEXT.items()}
-
-
-def codegen(kind):
-    return subprocess.run([os.environ["SOLARITH_CODEGEN"], kind], capture_output=True, text=True,
-                          check=True).stdout
+from calc_support import ERROR_CODE, SOURCE, codegen, enter_column, outcome
+from office import Office
 
 
 def catalogue():
@@ -55,16 +42,6 @@ def reference_cases():
     return cases
 
 
-def outcome(cell):
-    """('error', code), ('number', value) or ('text', string) of a formula cell."""
-    code = cell.getError()
-    if code:
-        return ("error", code)
-    if cell.FormulaResultType2 == 2:  # com.sun.star.sheet.FormulaResult.STRING
-        return ("text", cell.getString())
-    return ("number", cell.getValue())
-
-
 class Calc(unittest.TestCase):
     @classmethod
     def setUpClass(cls):
@@ -85,11 +62,7 @@ class Calc(unittest.TestCase):
         return sheets.getByName(name)
 
     def enter(self, sheet, formulas, column=0):
-        """Types the formulas into one column at once (cell-by-cell entry is slow) and recalculates."""
-        cells = sheet.getCellRangeByPosition(column, 0, column, len(formulas) - 1)
-        cells.setFormulaArray(tuple((f,) for f in formulas))
-        self.doc.calculateAll()
-        return [sheet.getCellByPosition(column, row) for row in range(len(formulas))]
+        return enter_column(self.doc, sheet, formulas, column)
 
     def check_outcome(self, formula, got, expected, tolerance, source):
         where = "%s (source: %s)" % (formula, source)
