@@ -221,6 +221,30 @@ private:
         });
     }
 
+    template <class MakeValues>
+    css::uno::Sequence<css::uno::Sequence<css::uno::Any>> table_result(std::size_t index, MakeValues make_values)
+    {
+        return guarded([&] {
+            const auto& spec = solarith::catalog::functions()[index];
+            return to_uno(std::get<solarith::catalog::Table>(solarith::catalog::evaluate(spec, make_values())));
+        });
+    }
+
+    static css::uno::Sequence<css::uno::Sequence<css::uno::Any>> to_uno(const solarith::catalog::Table& table)
+    {
+        css::uno::Sequence<css::uno::Sequence<css::uno::Any>> rows(static_cast<sal_Int32>(table.size()));
+        auto* row_out = rows.getArray();
+        for (const auto& row : table) {
+            css::uno::Sequence<css::uno::Any> cells(static_cast<sal_Int32>(row.size()));
+            auto* cell_out = cells.getArray();
+            for (const auto& cell : row)
+                *cell_out++ = cell.kind == Value::Kind::Number ? css::uno::Any(cell.number)
+                                                               : css::uno::Any(to_ou(cell.text));
+            *row_out++ = cells;
+        }
+        return rows;
+    }
+
     std::unordered_map<std::string, std::size_t> by_programmatic_name_;
     css::lang::Locale locale_;
 };

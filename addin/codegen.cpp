@@ -75,6 +75,36 @@ const char* converter(ArgKind kind)
     return "?";
 }
 
+const char* idl_result_type(ResultKind kind)
+{
+    switch (kind) {
+    case ResultKind::Number: return "double";
+    case ResultKind::Text: return "string";
+    case ResultKind::Table: return "sequence< sequence< any > >";
+    }
+    return "?";
+}
+
+const char* cpp_result_type(ResultKind kind)
+{
+    switch (kind) {
+    case ResultKind::Number: return "double";
+    case ResultKind::Text: return "::rtl::OUString";
+    case ResultKind::Table: return "css::uno::Sequence< css::uno::Sequence< css::uno::Any > >";
+    }
+    return "?";
+}
+
+const char* result_call(ResultKind kind)
+{
+    switch (kind) {
+    case ResultKind::Number: return "number_result";
+    case ResultKind::Text: return "text_result";
+    case ResultKind::Table: return "table_result";
+    }
+    return "?";
+}
+
 void write_idl(std::ostream& out)
 {
     out << "// Generated from the Solarith function catalogue by solarith-codegen; do not edit.\n"
@@ -83,8 +113,7 @@ void write_idl(std::ostream& out)
            "module org { module solarith {\n\n"
            "interface XSolarith : com::sun::star::uno::XInterface\n{\n";
     for (const auto& f : functions()) {
-        out << "    // " << f.name << "\n    " << (f.result == ResultKind::Number ? "double" : "string") << ' '
-            << programmatic_name(f.name) << '(';
+        out << "    // " << f.name << "\n    " << idl_result_type(f.result) << ' ' << programmatic_name(f.name) << '(';
         for (std::size_t i = 0; i < f.args.size(); ++i)
             out << (i ? ", " : "") << "[in] " << idl_type(f.args[i].kind) << ' ' << idl_parameter_name(f.args[i].name);
         out << ")\n        raises (com::sun::star::lang::IllegalArgumentException,"
@@ -101,11 +130,10 @@ void write_glue(std::ostream& out)
     const auto& all = functions();
     for (std::size_t index = 0; index < all.size(); ++index) {
         const auto& f = all[index];
-        const bool number = f.result == ResultKind::Number;
-        out << (number ? "double" : "::rtl::OUString") << " SAL_CALL " << programmatic_name(f.name) << '(';
+        out << cpp_result_type(f.result) << " SAL_CALL " << programmatic_name(f.name) << '(';
         for (std::size_t i = 0; i < f.args.size(); ++i)
             out << (i ? ", " : "") << cpp_type(f.args[i].kind) << " a" << i;
-        out << ") override\n{\n    return " << (number ? "number_result" : "text_result") << '(' << index
+        out << ") override\n{\n    return " << result_call(f.result) << '(' << index
             << ", [&] { return ";
         const bool has_rest = !f.args.empty() && f.args.back().kind == ArgKind::Rest;
         out << (has_rest ? "with_rest(Values{" : "Values{");
@@ -143,6 +171,8 @@ std::string example_result(const FunctionSpec& f)
     const Result result = evaluate(f, parse_arguments(f.example));
     if (const double* number = std::get_if<double>(&result))
         return solarith::format_number(*number) + (f.result_unit == "–" ? "" : " " + std::string(f.result_unit));
+    if (const Table* table = std::get_if<Table>(&result))
+        return "an array of " + std::to_string(table->size()) + " rows";
     return "\"" + std::get<std::string>(result) + "\"";
 }
 
@@ -180,8 +210,11 @@ void write_docs(std::ostream& out)
                     << markdown_escape(argument_help(a)) << " |\n";
             out << '\n';
         }
-        out << "Method: " << f.method << "\n\nExample: `=" << f.name << '(' << f.example << ")` → "
-            << example_result(f) << "\n";
+        out << "Method: " << f.method << "\n\n";
+        if (f.example.empty())
+            out << "Example: its ranges are too long to write inline; see the example workbooks.\n";
+        else
+            out << "Example: `=" << f.name << '(' << f.example << ")` → " << example_result(f) << "\n";
     }
 }
 
@@ -197,12 +230,15 @@ void write_names(std::ostream& out)
     }
 }
 
-// One line per function: display name, example arguments, the core's result
-// (17 significant digits) -- what the same call must give in Calc.
+// One line per function with a one-cell result and an inline example: display
+// name, example arguments, the core's result (17 significant digits) -- what
+// the same call must give in Calc.
 void write_examples(std::ostream& out)
 {
     out.precision(17);
     for (const auto& f : functions()) {
+        if (f.example.empty() || f.result == ResultKind::Table)
+            continue;  // array formulas with long ranges have tests of their own
         const Result result = evaluate(f, parse_arguments(f.example));
         out << f.name << '\t' << f.example << '\t';
         if (const double* number = std::get_if<double>(&result))

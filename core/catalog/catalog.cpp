@@ -213,9 +213,18 @@ Result evaluate(const FunctionSpec& spec, const std::vector<Value>& values)
     } catch (...) {
         fail_evaluation(name.c_str(), "calculation failed");
     }
-    if (const double* number = std::get_if<double>(&result); number && !std::isfinite(*number))
-        fail_domain(name.c_str(), "the result is not a finite number (" + format_number(*number)
-                                      + "); the inputs lie outside what the method can represent");
+    auto refuse_non_finite = [&](double number) {
+        if (!std::isfinite(number))
+            fail_domain(name.c_str(), "the result is not a finite number (" + format_number(number)
+                                          + "); the inputs lie outside what the method can represent");
+    };
+    if (const double* number = std::get_if<double>(&result))
+        refuse_non_finite(*number);
+    if (const Table* table = std::get_if<Table>(&result))
+        for (const auto& row : *table)
+            for (const auto& cell : row)
+                if (cell.kind == Value::Kind::Number)
+                    refuse_non_finite(cell.number);
     return result;
 }
 

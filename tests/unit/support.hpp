@@ -39,6 +39,27 @@ inline std::string call_text(const std::string& name, const std::string& argumen
     return std::get<std::string>(result);
 }
 
+// Evaluates NAME with arguments built in code (e.g. hourly ranges too long
+// to write as text); returns the array of an array function.
+inline solarith::catalog::Table call_table(const std::string& name, const std::vector<Value>& arguments)
+{
+    const auto result = solarith::catalog::evaluate(spec(name), arguments);
+    REQUIRE(std::holds_alternative<solarith::catalog::Table>(result));
+    return std::get<solarith::catalog::Table>(result);
+}
+
+// A range argument of numbers, as Calc passes a block of cells.
+inline Value range_of(const std::vector<std::vector<double>>& rows)
+{
+    std::vector<std::vector<Value>> cells;
+    for (const auto& row : rows) {
+        cells.emplace_back();
+        for (double x : row)
+            cells.back().push_back(Value::of(x));
+    }
+    return Value::of_table(std::move(cells));
+}
+
 // The message FN_DIAGNOSE would show ("ok" when the call is accepted).
 inline std::string diagnose(const std::string& name, const std::string& arguments)
 {

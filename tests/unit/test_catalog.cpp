@@ -2,6 +2,7 @@
 // without new test code.
 #include "support.hpp"
 
+#include <algorithm>
 #include <cmath>
 #include <set>
 
@@ -43,12 +44,17 @@ TEST_CASE("every function's example call is accepted and gives a finite result")
     for (const auto& f : functions()) {
         CAPTURE(f.name);
         CAPTURE(f.example);
-        REQUIRE(!f.example.empty());
+        if (f.example.empty()) {  // allowed only where a range is too long to write inline
+            CHECK(std::any_of(f.args.begin(), f.args.end(), [](const ArgSpec& a) { return a.kind == ArgKind::Range; }));
+            continue;
+        }
         const auto result = evaluate(f, parse_arguments(f.example));
         if (f.result == ResultKind::Number)
             CHECK(std::isfinite(std::get<double>(result)));
-        else
+        else if (f.result == ResultKind::Text)
             CHECK(!std::get<std::string>(result).empty());
+        else
+            CHECK(!std::get<Table>(result).empty());
     }
 }
 

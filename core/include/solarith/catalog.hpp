@@ -36,7 +36,10 @@ struct ArgSpec {
     std::string_view default_text = {};  // OptionalText only
 };
 
-enum class ResultKind { Number, Text };
+// What a function returns. Number -> double, Text -> string, Table -> a
+// 2-D array of numbers and texts (sequence< sequence< any > >, entered in
+// Calc as an array formula).
+enum class ResultKind { Number, Text, Table };
 
 // One argument as it arrived: omitted, a number, a text, or a range of cells.
 struct Value {
@@ -52,7 +55,8 @@ struct Value {
     static Value of_table(std::vector<std::vector<Value>> rows);
 };
 
-using Result = std::variant<double, std::string>;
+using Table = std::vector<std::vector<Value>>;
+using Result = std::variant<double, std::string, Table>;
 
 struct FunctionSpec;
 
@@ -97,7 +101,10 @@ struct FunctionSpec {
     std::string_view method;       // formula, validity range and published source (FN_METHOD)
     std::vector<ArgSpec> args;
     std::string_view example;      // arguments of a typical valid call in Calc syntax,
-                                   // e.g. "60; 0.9" or "{0.1; 0.05}; {0.04; 1.2}; 2"
+                                   // e.g. "60; 0.9" or "{0.1; 0.05}; {0.04; 1.2}; 2";
+                                   // empty only where a range argument is too long to
+                                   // write inline (hourly data) — such a function
+                                   // needs tests of its own through Calc.
     Invoker invoke = nullptr;
 };
 
