@@ -19,6 +19,11 @@ inline constexpr double boltzmann = 1.380649e-23;
 
 inline constexpr double pi = 3.14159265358979323846;
 
+// Avogadro constant N_A, 1/mol (exact).
+inline constexpr double avogadro = 6.02214076e23;
+// Molar gas constant R = N_A·k, J/(mol·K) (exact; CODATA 2018 prints 8.314462618...).
+inline constexpr double molar_gas_constant = avogadro * boltzmann;
+
 // The radiation constants follow exactly from h, c and k; computing them here
 // keeps every digit a double holds. They agree with the values CODATA 2018
 // prints (sigma 5.670374419e-8, c1 3.741771852e-16, c2 1.438776877e-2) in
@@ -37,6 +42,12 @@ inline constexpr double wien_displacement = 2.897771955e-3;
 
 // Standard acceleration of gravity g_n, m/s² (exact, 3rd CGPM 1901).
 inline constexpr double standard_gravity = 9.80665;
+
+// Solar constant G_sc, the total solar irradiance at the mean Earth–sun
+// distance, W/m²: 1360.8 ± 0.5 W/m² measured by SORCE/TIM, Kopp & Lean (2011),
+// Geophys. Res. Lett. 38, L01706, rounded to 1361 as the IAU 2015 nominal
+// value (Resolution B3). Older texts use 1367 W/m² (World Radiation Center).
+inline constexpr double solar_constant = 1361.0;
 
 // Absolute temperature in K of a temperature in °C.
 constexpr double kelvin(double t_celsius) { return t_celsius + zero_celsius_in_kelvin; }
