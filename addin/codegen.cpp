@@ -3,12 +3,14 @@
 //   solarith-codegen glue  -> the add-in's method bodies (included by addin.cpp)
 //   solarith-codegen docs  -> the function reference (checked in as docs/functions.md)
 //   solarith-codegen names|examples -> lists the tests compare with Calc and the type library
+//   solarith-codegen evaluate NAME  -> the core's result for arguments read from stdin
 // The build compiles the checked-in IDL and regenerates the glue; the tests
 // fail when the checked-in files and the catalogue disagree.
 #include "solarith/catalog.hpp"
 #include "solarith/errors.hpp"
 
 #include <iostream>
+#include <iterator>
 #include <set>
 #include <string>
 
@@ -16,7 +18,7 @@ using namespace solarith::catalog;
 
 namespace {
 
-// Words UNO IDL reserves; an argument so named gets a trailing underscore.
+// Words UNO IDL reserves; an argument so named gets the suffix "Arg".
 bool is_idl_keyword(std::string_view word)
 {
     static const std::set<std::string_view> keywords = {
@@ -32,7 +34,7 @@ std::string idl_parameter_name(std::string_view name)
 {
     std::string out = programmatic_name(name);
     if (is_idl_keyword(out))
-        out += '_';
+        out += "Arg";
     return out;
 }
 
@@ -42,7 +44,8 @@ const char* idl_type(ArgKind kind)
     case ArgKind::Number: return "double";
     case ArgKind::Text: return "string";
     case ArgKind::OptionalNumber:
-    case ArgKind::OptionalText: return "any";
+    case ArgKind::OptionalText:
+    case ArgKind::OptionalRange: return "any";
     case ArgKind::Range: return "sequence< sequence< any > >";
     case ArgKind::Rest: return "sequence< any >";
     }
@@ -55,7 +58,8 @@ const char* cpp_type(ArgKind kind)
     case ArgKind::Number: return "double";
     case ArgKind::Text: return "const ::rtl::OUString&";
     case ArgKind::OptionalNumber:
-    case ArgKind::OptionalText: return "const css::uno::Any&";
+    case ArgKind::OptionalText:
+    case ArgKind::OptionalRange: return "const css::uno::Any&";
     case ArgKind::Range: return "const css::uno::Sequence< css::uno::Sequence< css::uno::Any > >&";
     case ArgKind::Rest: return "const css::uno::Sequence< css::uno::Any >&";
     }
@@ -68,7 +72,8 @@ const char* converter(ArgKind kind)
     case ArgKind::Number: return "from_double";
     case ArgKind::Text: return "from_text";
     case ArgKind::OptionalNumber:
-    case ArgKind::OptionalText: return "from_any";
+    case ArgKind::OptionalText:
+    case ArgKind::OptionalRange: return "from_any";
     case ArgKind::Range: return "from_range";
     case ArgKind::Rest: return "";
     }
@@ -250,15 +255,51 @@ void write_examples(std::ostream& out)
 }
 
 // One line per function: display name, then one letter per argument kind
-// (N number, n optional number, T text, t optional text, R range, * rest).
+// (N number, n optional number, T text, t optional text, R range, * rest,
+// r optional range).
 void write_kinds(std::ostream& out)
 {
     for (const auto& f : functions()) {
         out << f.name << '\t';
         for (const auto& a : f.args)
-            out << "NnTtR*"[static_cast<int>(a.kind)];
+            out << "NnTtR*r"[static_cast<int>(a.kind)];
         out << '\n';
     }
+}
+
+// Evaluates NAME with the Calc-style argument list read from standard input
+// (inline arrays {..|..} for ranges) and prints the result, a table as one
+// line per row with tab-separated cells, numbers with 17 significant digits:
+// what the tests through Calc compare array formulas with.
+int write_evaluation(std::ostream& out, const std::string& name)
+{
+    const FunctionSpec* f = find(name);
+    if (!f) {
+        std::cerr << "no function " << name << '\n';
+        return 2;
+    }
+    const std::string arguments{std::istreambuf_iterator<char>(std::cin), std::istreambuf_iterator<char>()};
+    const Result result = evaluate(*f, parse_arguments(arguments));
+    out.precision(17);
+    auto write_cell = [&out](const Value& cell) {
+        if (cell.kind == Value::Kind::Number)
+            out << cell.number;
+        else
+            out << cell.text;
+    };
+    if (const double* number = std::get_if<double>(&result))
+        out << *number << '\n';
+    else if (const std::string* text = std::get_if<std::string>(&result))
+        out << *text << '\n';
+    else
+        for (const auto& row : std::get<Table>(result)) {
+            for (std::size_t c = 0; c < row.size(); ++c) {
+                out << (c ? "\t" : "");
+                write_cell(row[c]);
+            }
+            out << '\n';
+        }
+    return 0;
 }
 
 }  // namespace
@@ -278,8 +319,17 @@ int main(int argc, char** argv)
         write_examples(std::cout);
     else if (what == "kinds")
         write_kinds(std::cout);
-    else {
-        std::cerr << "usage: solarith-codegen idl|glue|docs|names|examples|kinds\n";
+    else if (what == "evaluate" && argc > 2) {
+        try {
+            const int status = write_evaluation(std::cout, argv[2]);
+            if (status)
+                return status;
+        } catch (const std::exception& e) {
+            std::cerr << e.what() << '\n';
+            return 1;
+        }
+    } else {
+        std::cerr << "usage: solarith-codegen idl|glue|docs|names|examples|kinds|evaluate NAME < arguments\n";
         return 2;
     }
     return std::cout.good() ? 0 : 1;

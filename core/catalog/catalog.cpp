@@ -91,16 +91,20 @@ Args::Args(const FunctionSpec& spec, const std::vector<Value>& values)
 {
     const bool has_rest = !spec.args.empty() && spec.args.back().kind == ArgKind::Rest;
     const std::size_t fixed = has_rest ? spec.args.size() - 1 : spec.args.size();
-    if (values.size() > fixed) {
-        if (!has_rest)
-            fail_domain(std::string(spec.name).c_str(),
-                        "takes at most " + std::to_string(fixed) + " arguments, "
-                            + std::to_string(values.size()) + " given");
-        rest_.assign(values.begin() + static_cast<std::ptrdiff_t>(fixed), values.end());
-    }
+    fixed_ = fixed;
+    if (values.size() > fixed && !has_rest)
+        fail_domain(std::string(spec.name).c_str(), "takes at most " + std::to_string(fixed) + " arguments, "
+                                                        + std::to_string(values.size()) + " given");
     for (std::size_t i = 0; i < std::min(fixed, spec.args.size()); ++i)
         if (is_required(spec.args[i].kind) && at(i).kind == Value::Kind::Omitted)
             fail(i, "is missing; it is required");
+}
+
+std::vector<Value> Args::rest() const
+{
+    if (values_.size() <= fixed_)
+        return {};
+    return {values_.begin() + static_cast<std::ptrdiff_t>(fixed_), values_.end()};
 }
 
 const Value& Args::at(std::size_t index) const
@@ -182,14 +186,38 @@ std::vector<double> Args::numbers(std::size_t index) const
         fail(index, "is " + describe_cell(v) + "; a range of numbers is expected");
     std::vector<double> result;
     for (std::size_t r = 0; r < v.table.size(); ++r)
-        for (std::size_t c = 0; c < v.table[r].size(); ++c) {
-            const Value& cell = v.table[r][c];
-            if (cell.kind != Value::Kind::Number)
-                fail(index, "has a cell that is " + describe_cell(cell) + " (row " + std::to_string(r + 1)
-                                + ", column " + std::to_string(c + 1) + " of the range); every cell must hold a number");
-            result.push_back(cell.number);
-        }
+        for (std::size_t c = 0; c < v.table[r].size(); ++c)
+            result.push_back(cell_number(index, v.table[r][c], r, c));
     return result;
+}
+
+double Args::cell_number(std::size_t index, const Value& cell, std::size_t row, std::size_t column) const
+{
+    if (cell.kind != Value::Kind::Number)
+        fail(index, "has a cell that is " + describe_cell(cell) + " (row " + std::to_string(row + 1) + ", column "
+                        + std::to_string(column + 1) + " of the range); every cell must hold a number");
+    return cell.number;
+}
+
+Args::Matrix Args::matrix(std::size_t index) const
+{
+    const Value& v = at(index);
+    if (v.kind == Value::Kind::Number)
+        return {1, 1, {v.number}};
+    if (v.kind != Value::Kind::Table)
+        fail(index, "is " + describe_cell(v) + "; a range of numbers is expected");
+    Matrix m;
+    m.rows = v.table.size();
+    m.columns = m.rows ? v.table.front().size() : 0;
+    m.cells.reserve(m.rows * m.columns);
+    for (std::size_t r = 0; r < m.rows; ++r) {
+        if (v.table[r].size() != m.columns)
+            fail(index, "has rows of different length (row " + std::to_string(r + 1)
+                            + "); a rectangular range is expected");
+        for (std::size_t c = 0; c < m.columns; ++c)
+            m.cells.push_back(cell_number(index, v.table[r][c], r, c));
+    }
+    return m;
 }
 
 Result evaluate(const FunctionSpec& spec, const std::vector<Value>& values)
@@ -258,6 +286,7 @@ std::string argument_help(const ArgSpec& arg)
         break;
     case ArgKind::OptionalText: help += " Optional, default \"" + std::string(arg.default_text) + "\"."; break;
     case ArgKind::Range: help += " A range of cells; blank or text cells are an error."; break;
+    case ArgKind::OptionalRange: help += " Optional. A range of cells; blank or text cells are an error."; break;
     default: break;
     }
     return help;
@@ -409,7 +438,7 @@ const std::vector<FunctionSpec>& functions()
         std::vector<FunctionSpec> all;
         for (auto family : {radiation_functions, conduction_functions, convection_functions,
                             properties_functions, storage_functions, losses_functions, sun_functions,
-                            collector_functions, audit_functions})
+                            collector_functions, sizing_functions, simulation_functions, audit_functions})
             for (auto& f : family())
                 all.push_back(std::move(f));
         return all;

@@ -52,7 +52,7 @@ def hostile_calls():
         for position, kind in enumerate(kinds[name]):
             if kind == "*" or position >= len(arguments):
                 continue
-            replacements = HOSTILE_RANGES if kind == "R" else HOSTILE_SCALARS
+            replacements = HOSTILE_RANGES if kind in "Rr" else HOSTILE_SCALARS
             for what, text in replacements.items():
                 args = list(arguments)
                 args[position] = text

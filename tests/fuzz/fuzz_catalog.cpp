@@ -3,7 +3,7 @@
 // Contract checked for each call: it returns a finite number or a text, or it
 // raises DomainError or EvaluationError; nothing else escapes, nothing
 // crashes, AddressSanitizer and UndefinedBehaviorSanitizer stay silent, and
-// no call takes longer than 100 ms.
+// no call takes longer than 100 ms (300 ms in this instrumented build).
 //
 // Input layout (bytes, read front to back; missing bytes read as 0):
 //   u16 function selector (index modulo the number of functions)
@@ -25,6 +25,7 @@
 #include <cstdio>
 #include <cstdlib>
 #include <cstring>
+#include <ctime>
 
 using solarith::catalog::FunctionSpec;
 using solarith::catalog::Value;
@@ -105,6 +106,19 @@ Value argument(Reader& in, const std::vector<Value>& example, std::size_t positi
     }
 }
 
+// CPU time of this thread: a busy machine does not make a call look slow.
+std::chrono::nanoseconds thread_cpu_time()
+{
+    timespec now{};
+    clock_gettime(CLOCK_THREAD_CPUTIME_ID, &now);
+    return std::chrono::seconds(now.tv_sec) + std::chrono::nanoseconds(now.tv_nsec);
+}
+
+// The contract is 100 ms per call in the released library. AddressSanitizer and
+// UndefinedBehaviorSanitizer make code two to three times slower, so this
+// instrumented build allows three times that.
+constexpr auto longest_call = std::chrono::milliseconds(300);
+
 [[noreturn]] void broken(const FunctionSpec& f, const char* what)
 {
     std::fprintf(stderr, "contract broken by %.*s: %s\n", static_cast<int>(f.name.size()), f.name.data(), what);
@@ -131,7 +145,7 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
     for (std::size_t i = 0; i < count; ++i)
         values.push_back(argument(in, example, i));
 
-    const auto start = std::chrono::steady_clock::now();
+    const auto start = thread_cpu_time();
     try {
         const auto result = solarith::catalog::evaluate(f, values);
         if (const double* x = std::get_if<double>(&result); x && !std::isfinite(*x))
@@ -143,8 +157,7 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size
     } catch (...) {
         broken(f, "unknown exception");
     }
-    const auto elapsed = std::chrono::steady_clock::now() - start;
-    if (elapsed > std::chrono::milliseconds(100))
-        broken(f, "call took longer than 100 ms");
+    if (thread_cpu_time() - start > longest_call)
+        broken(f, "call took too long");
     return 0;
 }

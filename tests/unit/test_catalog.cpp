@@ -28,7 +28,8 @@ TEST_CASE("catalogue entries are complete and consistent")
             CHECK(!a.description.empty());
             const bool textual = a.kind == ArgKind::Text || a.kind == ArgKind::OptionalText || a.kind == ArgKind::Rest;
             CHECK_MESSAGE((textual || !a.unit.empty()), "numeric arguments state a unit ('–' when dimensionless)");
-            const bool optional = a.kind == ArgKind::OptionalNumber || a.kind == ArgKind::OptionalText;
+            const bool optional = a.kind == ArgKind::OptionalNumber || a.kind == ArgKind::OptionalText
+                                  || a.kind == ArgKind::OptionalRange;
             if (optional)
                 optional_seen = true;
             else if (a.kind != ArgKind::Rest)

@@ -25,7 +25,13 @@ namespace solarith::catalog {
 //   OptionalText    any         (may be omitted; default_text applies)
 //   Range           sequence< sequence< any > >  (blank and text cells are errors)
 //   Rest            sequence< any >  (the trailing variable argument list)
-enum class ArgKind { Number, OptionalNumber, Text, OptionalText, Range, Rest };
+//   OptionalRange   any         (a range that may be omitted: Calc passes a
+//                                range into an any as sequence< sequence< any > >,
+//                                blank cells as empty texts, an omitted one as
+//                                void; the invoker tests omitted() and supplies
+//                                its own defaults)
+// New kinds go at the end: the kind letters of solarith-codegen index this order.
+enum class ArgKind { Number, OptionalNumber, Text, OptionalText, Range, Rest, OptionalRange };
 
 struct ArgSpec {
     std::string_view name;         // as the function wizard shows it, e.g. "T"
@@ -74,8 +80,18 @@ public:
     std::string text(std::size_t index) const;
     // All cells of a range, row by row; every cell must hold a number.
     std::vector<double> numbers(std::size_t index) const;
-    // The values of the trailing Rest argument.
-    const std::vector<Value>& rest() const { return rest_; }
+    // The cells of a range with its shape, row by row; every cell must hold a
+    // number and every row have the same length (a single number is a 1x1
+    // range). For arguments whose layout matters (hourly tables).
+    struct Matrix {
+        std::size_t rows = 0;
+        std::size_t columns = 0;
+        std::vector<double> cells;  // rows·columns values, row by row
+        double at(std::size_t row, std::size_t column) const { return cells[row * columns + column]; }
+    };
+    Matrix matrix(std::size_t index) const;
+    // The values of the trailing Rest argument (a copy, made only when asked for).
+    std::vector<Value> rest() const;
     bool omitted(std::size_t index) const;
 
     const FunctionSpec& spec() const { return spec_; }
@@ -83,10 +99,11 @@ public:
 private:
     const Value& at(std::size_t index) const;
     [[noreturn]] void fail(std::size_t index, const std::string& reason) const;
+    double cell_number(std::size_t index, const Value& cell, std::size_t row, std::size_t column) const;
 
     const FunctionSpec& spec_;
     const std::vector<Value>& values_;
-    std::vector<Value> rest_;
+    std::size_t fixed_ = 0;  // arguments before the Rest argument
 };
 
 using Invoker = Result (*)(const Args&);
@@ -153,6 +170,8 @@ std::vector<FunctionSpec> storage_functions();
 std::vector<FunctionSpec> losses_functions();
 std::vector<FunctionSpec> sun_functions();
 std::vector<FunctionSpec> collector_functions();
+std::vector<FunctionSpec> sizing_functions();
+std::vector<FunctionSpec> simulation_functions();
 std::vector<FunctionSpec> audit_functions();
 
 }  // namespace solarith::catalog
