@@ -34,7 +34,7 @@ def type_library_methods():
     text = subprocess.run([os.environ["UNOIDL_READ"], os.environ["SOLARITH_RDB"]], capture_output=True,
                           text=True, check=True).stdout
     methods = {}
-    for name, params in re.findall(r"^\s*(?:double|string) (\w+)\((.*?)\)", text, re.M):
+    for name, params in re.findall(r"^\s*(?:double|string|sequence< sequence< any > >) (\w+)\((.*?)\)", text, re.M):
         methods[name] = params.count("[in]")
     return methods
 
