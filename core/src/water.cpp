@@ -80,10 +80,19 @@ struct Gibbs {
     double g = 0, g_p = 0, g_pp = 0, g_t = 0, g_tt = 0, g_pt = 0;
 };
 
-// x^k for a small integer exponent, negative ones included.
+// x^k for a small integer exponent, negative ones included, by binary
+// powering: a handful of multiplications instead of a std::pow call (the IF97
+// sums need a few hundred powers per property), within a few ulp of x^k.
 double power(double x, int k)
 {
-    return std::pow(x, static_cast<double>(k));
+    unsigned n = static_cast<unsigned>(k < 0 ? -k : k);
+    double result = 1, base = x;
+    for (; n != 0; n >>= 1) {
+        if (n & 1u)
+            result *= base;
+        base *= base;
+    }
+    return k < 0 ? 1 / result : result;
 }
 
 Gibbs region1_gibbs(double pi, double tau)
