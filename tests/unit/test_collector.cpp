@@ -316,7 +316,7 @@ TEST_CASE("COLL_TAU_ALPHA: Fresnel, Bouguer and the absorber's multiple reflecti
 TEST_CASE("COLL_TOP_LOSS: Klein's equation, ranges and trends")
 {
     // Klein's equation (D&B eq. 6.4.9) evaluated by hand for one case, to
-    // catch a slip in the transcription: Tp = 373.15 K, Ta = 283.15 K, β = 45°,
+    // catch a slip in copying the formula: Tp = 373.15 K, Ta = 283.15 K, β = 45°,
     // εp = 0.95, εc = 0.88, N = 1, V = 3 m/s -> h_w = 8.6·3^0.6 (CONV_WIND_COEFF).
     {
         const double tp = 373.15, ta = 283.15, hw = 8.6 * std::pow(3.0, 0.6), n = 1, ep = 0.95, eg = 0.88;
