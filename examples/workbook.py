@@ -1,0 +1,300 @@
+"""The writer every example workbook is built with: a calculation sheet laid
+out row by row (label | value | unit | source or note), tables whose columns
+are filled with formulas, charts over those columns, and the cautions block.
+
+Formula templates name other cells by key in braces:
+  {key}  a single input or result  -> its absolute address, e.g. $B$7
+  {col}  a table column            -> inside that table's rows: the cell of the
+                                      same row; anywhere else: the column's
+                                      whole range, e.g. $C$12:$C$23
+Every workbook uses the same colours, so inputs, results and notes are told
+apart at a glance.
+"""
+import uno  # noqa: F401  (makes the com.sun.star modules importable)
+from com.sun.star.awt import Rectangle
+from com.sun.star.lang import Locale
+from com.sun.star.table import CellAddress, CellRangeAddress
+
+INPUT_COLOUR = 0xFFF2CC     # pale yellow: typed in by the engineer
+RESULT_COLOUR = 0xE2F0D9    # pale green: computed
+HEADING_COLOUR = 0xD9E1F2   # pale blue: section and table headings
+NOTE_COLOUR = 0xF2F2F2      # grey: notes and cautions
+FAIL_COLOUR = 0xF4CCCC      # pale red: a check that does not pass
+
+BOLD = 150
+ITALIC = 2
+ROW_HEIGHT = 452            # 1/100 mm, Calc's default row height
+
+CAUTIONS = [
+    "Cautions. These figures are engineering estimates for an invented scenario; they do not replace a design "
+    "checked against the applicable codes and standards by a licensed professional, whose judgement prevails.",
+    "Stagnation: with no heat drawn, a collector in full sun reaches the stagnation temperature estimated in these "
+    "workbooks, well above 100 °C; absorber plates, collector outlets, pipes and tanks burn skin on contact, and "
+    "the fluid can boil. Components and the heat-transfer fluid must be rated for it.",
+    "Scalding: water stored above about 50–60 °C scalds within seconds. Fit thermostatic mixing valves at the "
+    "outlets as local codes require.",
+    "Legionella: water stored or held too cool can grow Legionella. Keep stored water at the temperatures the "
+    "local rules prescribe (a regular heat-up of the whole store where required).",
+    "Pressure and frost: closed circuits need pressure relief valves and expansion vessels sized to code; "
+    "circuits exposed to frost need freeze protection (antifreeze or drain-back) sized for the site's lowest "
+    "temperature.",
+    "Local codes, standards and licensed professional practice prevail over any figure in this workbook.",
+]
+
+
+def column_letter(index):
+    letters = ""
+    index += 1
+    while index:
+        index, rest = divmod(index - 1, 26)
+        letters = chr(ord("A") + rest) + letters
+    return letters
+
+
+class Column:
+    """A table column: a header, a unit, and either input values or a formula template."""
+
+    def __init__(self, key, header, unit, values=None, formula=None, number_format="0.00", width=None):
+        assert (values is None) != (formula is None), "a column has values or a formula, not both"
+        self.key, self.header, self.unit = key, header, unit
+        self.values, self.formula = values, formula
+        self.number_format, self.width = number_format, width
+
+
+class Sheet:
+    """Writes a calculation sheet from the top down; self.row is the next free row (0-based)."""
+
+    def __init__(self, document, sheet, widths=(7600, 2400, 2000, 6200)):
+        self.document = document
+        self.sheet = sheet
+        self.row = 0
+        self.cells = {}     # key -> absolute address of a single cell
+        self.columns = {}   # key -> (column index, first row, last row), 0-based
+        self.widths = widths
+        for column, width in enumerate(widths):
+            sheet.Columns.getByIndex(column).Width = width  # 1/100 mm
+        page = document.StyleFamilies.getByName("PageStyles").getByName(sheet.PageStyle)
+        page.ScaleToPagesX = 1  # print one page wide
+        page.ScaleToPagesY = 0
+
+    # -- addresses and formulas ----------------------------------------------
+    def _absolute(self, column, row):
+        return "$%s$%d" % (column_letter(column), row + 1)
+
+    def ref(self, key):
+        return self.cells[key]
+
+    def range(self, key):
+        column, first, last = self.columns[key]
+        return "%s:%s" % (self._absolute(column, first), self._absolute(column, last))
+
+    def expand(self, template, row=None):
+        """The template with {key} replaced by addresses; `row` is the table row being written, if any."""
+        names = dict(self.cells)
+        for key, (column, first, last) in self.columns.items():
+            if row is not None and first <= row <= last:
+                names[key] = "%s%d" % (column_letter(column), row + 1)
+            else:
+                names[key] = self.range(key)
+        return template.format(**names)
+
+    def _cell(self, column, row=None):
+        return self.sheet.getCellByPosition(column, self.row if row is None else row)
+
+    def _fill(self, colour, first=0, last=None, row=None):
+        row = self.row if row is None else row
+        last = len(self.widths) - 1 if last is None else last
+        self.sheet.getCellRangeByPosition(first, row, last, row).CellBackColor = colour
+
+    def number_format(self, code):
+        formats = self.document.NumberFormats
+        locale = Locale()
+        key = formats.queryKey(code, locale, False)
+        return key if key != -1 else formats.addNew(code, locale)
+
+    def _name(self, name, column, row):
+        address = CellAddress()
+        address.Sheet = self.sheet.RangeAddress.Sheet
+        self.document.NamedRanges.addNewByName(
+            name, "$'%s'.%s" % (self.sheet.Name, self._absolute(column, row)), address, 0)
+
+    # -- rows -----------------------------------------------------------------
+    def _full_width(self, text_or_formula, characters_per_line=80, last_column=3):
+        """Text across columns A..last of the current row, wrapped, the row made tall enough."""
+        cells = self.sheet.getCellRangeByPosition(0, self.row, last_column, self.row)
+        cells.merge(True)
+        cells.IsTextWrapped = True
+        cell = self._cell(0)
+        if text_or_formula.startswith("="):
+            cell.setFormula(text_or_formula)
+        else:
+            cell.setString(text_or_formula)
+        lines = max(1, -(-len(cell.getString()) // characters_per_line))
+        self.sheet.Rows.getByIndex(self.row).Height = 120 + 420 * lines  # 1/100 mm
+        return cells
+
+    def title(self, text, subtitle):
+        self._cell(0).setString(text)
+        self._cell(0).CharHeight = 14
+        self._cell(0).CharWeight = BOLD
+        self.row += 1
+        self._full_width(subtitle).CharPosture = ITALIC
+        self.row += 2
+
+    def heading(self, text):
+        self._fill(HEADING_COLOUR)
+        self._cell(0).setString(text)
+        self._cell(0).CharWeight = BOLD
+        self.row += 1
+
+    def _row(self, key, label, unit, note, colour):
+        self._cell(0).setString(label)
+        self._cell(2).setString(unit)
+        self._cell(3).setString(note)
+        self._fill(colour, last=3)
+        if key:
+            assert key not in self.cells and key not in self.columns, key
+            self.cells[key] = self._absolute(1, self.row)
+
+    def input(self, key, label, value, unit, note="", number_format=None):
+        """An input the engineer may change: a number, or text (e.g. a model name)."""
+        self._row(key, label, unit, note, INPUT_COLOUR)
+        if isinstance(value, str):
+            self._cell(1).setString(value)
+        else:
+            self._cell(1).setValue(value)
+        if number_format:
+            self._cell(1).NumberFormat = self.number_format(number_format)
+        self.row += 1
+
+    def result(self, key, label, formula, unit, note="", number_format="0.00", named=False):
+        """A computed value; `named` makes it a key result (a named cell printed by the run command)."""
+        self._row(key, label, unit, note, RESULT_COLOUR)
+        cell = self._cell(1)
+        cell.setFormula("=" + self.expand(formula))
+        cell.NumberFormat = self.number_format(number_format)
+        cell.CharWeight = BOLD
+        if named:
+            self._name(key, 1, self.row)
+        self.row += 1
+
+    def text_result(self, label, formula):
+        """A label row, then the formula's text across the full width below it."""
+        self._row(None, label, "", "", RESULT_COLOUR)
+        self.row += 1
+        self.document.calculateAll()  # the text's length sets the row height
+        self._full_width("=" + self.expand(formula)).CellBackColor = RESULT_COLOUR
+        self.row += 1
+
+    def note(self, text):
+        cells = self._full_width(text)
+        cells.CharPosture = ITALIC
+        cells.CellBackColor = NOTE_COLOUR
+        self.row += 1
+
+    def notes(self, lines):
+        self.row += 1
+        for line in lines:
+            self.note(line)
+
+    def space(self, rows=1):
+        self.row += rows
+
+    # -- tables ---------------------------------------------------------------
+    def table(self, columns, rows, first_column=0):
+        """A table of `rows` rows under a header row "header [unit]". Input columns are yellow, formula
+        columns green. Returns the 0-based (first, last) data rows."""
+        header_row, first, last = self.row, self.row + 1, self.row + rows
+        for offset, column in enumerate(columns):
+            index = first_column + offset
+            assert column.key not in self.cells and column.key not in self.columns, column.key
+            self.columns[column.key] = (index, first, last)
+            header = self._cell(index, header_row)
+            header.setString("%s [%s]" % (column.header, column.unit) if column.unit else column.header)
+            header.CharWeight = BOLD
+            header.IsTextWrapped = True
+            header.CellBackColor = HEADING_COLOUR
+            if column.width:
+                self.sheet.Columns.getByIndex(index).Width = column.width
+        self.sheet.Rows.getByIndex(header_row).Height = 2 * ROW_HEIGHT
+        for offset, column in enumerate(columns):
+            index = first_column + offset
+            block = self.sheet.getCellRangeByPosition(index, first, index, last)
+            if column.values is not None:
+                assert len(column.values) == rows, column.key
+                block.setDataArray(tuple((v,) for v in column.values))
+                block.CellBackColor = INPUT_COLOUR
+            else:
+                for row in range(first, last + 1):
+                    self._cell(index, row).setFormula("=" + self.expand(column.formula, row))
+                block.CellBackColor = RESULT_COLOUR
+            block.NumberFormat = self.number_format(column.number_format)
+        self.row = last + 1
+        return first, last
+
+    def fill_down(self, columns, rows, first_column=0):
+        """As table(), for long tables: each formula is written once and filled down (Calc's fill is far
+        faster than writing thousands of formulas one by one)."""
+        header_row, first, last = self.row, self.row + 1, self.row + rows
+        for offset, column in enumerate(columns):
+            index = first_column + offset
+            self.columns[column.key] = (index, first, last)
+            header = self._cell(index, header_row)
+            header.setString("%s [%s]" % (column.header, column.unit) if column.unit else column.header)
+            header.CharWeight = BOLD
+            header.IsTextWrapped = True
+            header.CellBackColor = HEADING_COLOUR
+            if column.width:
+                self.sheet.Columns.getByIndex(index).Width = column.width
+        self.sheet.Rows.getByIndex(header_row).Height = 2 * ROW_HEIGHT
+        from com.sun.star.sheet.FillDirection import TO_BOTTOM
+        for offset, column in enumerate(columns):
+            index = first_column + offset
+            block = self.sheet.getCellRangeByPosition(index, first, index, last)
+            if column.values is not None:
+                assert len(column.values) == rows, column.key
+                block.setDataArray(tuple((v,) for v in column.values))
+            else:
+                self._cell(index, first).setFormula("=" + self.expand(column.formula, first))
+                block.fillAuto(TO_BOTTOM, 1)
+            block.NumberFormat = self.number_format(column.number_format)
+        self.row = last + 1
+        return first, last
+
+    # -- charts ---------------------------------------------------------------
+    def chart(self, name, title, x_key, y_keys, x_title, y_title, kind="xy", height_rows=18,
+              first_column=0, last_column=3):
+        """A chart below the current row over table columns: "xy" (lines through points, x numeric),
+        "column" (bars per category of x) or "line" (categories of x). Series are named by the
+        column headers."""
+        keys = [x_key] + list(y_keys)
+        ranges = []
+        for key in keys:
+            column, first, last = self.columns[key]
+            address = CellRangeAddress()
+            address.Sheet = self.sheet.RangeAddress.Sheet
+            address.StartColumn = address.EndColumn = column
+            address.StartRow, address.EndRow = first - 1, last  # with the header row: series names
+            ranges.append(address)
+        top = self._cell(first_column).Position
+        right = self._cell(last_column + 1).Position
+        area = Rectangle()
+        area.X, area.Y = top.X + 100, top.Y + 100
+        area.Width, area.Height = right.X - top.X - 200, height_rows * ROW_HEIGHT - 200
+        self.sheet.Charts.addNewByName(name, area, tuple(ranges), True, kind != "xy")
+        chart = self.sheet.Charts.getByName(name).EmbeddedObject
+        diagram = {"xy": "com.sun.star.chart.XYDiagram", "column": "com.sun.star.chart.BarDiagram",
+                   "line": "com.sun.star.chart.LineDiagram"}[kind]
+        chart.Diagram = chart.createInstance(diagram)
+        if kind == "column":
+            chart.Diagram.Vertical = False  # bars stand upright
+        chart.HasMainTitle = True
+        chart.Title.String = title
+        chart.HasLegend = len(y_keys) > 1
+        diagram = chart.Diagram
+        diagram.HasXAxisTitle = True
+        diagram.XAxisTitle.String = x_title
+        diagram.HasYAxisTitle = True
+        diagram.YAxisTitle.String = y_title
+        self.row += height_rows
+        return chart
