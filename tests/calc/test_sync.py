@@ -82,5 +82,23 @@ class InterfaceInSync(unittest.TestCase):
                           "name is final" % (name, name, functions[name][0]))
 
 
+class VerificationWorkbookInSync(unittest.TestCase):
+    def test_verification_workbook_holds_every_reference_case(self):
+        """examples/verification.fods is generated from the test data: a case added to the tests must reach
+        it (rerun examples/build_examples.py ... verification.fods)."""
+        import html
+        import sys
+        sys.path.insert(0, os.path.join(SOURCE, "examples"))
+        import verification
+        cases = verification._suite_cases() + verification._table_cases()
+        workbook = read(os.path.join(SOURCE, "examples", verification.FILE))
+        shown = re.findall(r"<text:p>(=[^<]*)</text:p>", workbook)
+        formulas = [html.unescape(text) for text in shown]
+        self.assertEqual(len(formulas), len(cases), "rerun: /usr/bin/python3 examples/build_examples.py "
+                         "build/solarith.oxt verification.fods")
+        for case, formula in zip(cases, formulas):
+            self.assertEqual("=" + case[1], formula)
+
+
 if __name__ == "__main__":
     unittest.main(verbosity=2)
