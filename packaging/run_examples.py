@@ -92,7 +92,7 @@ def missing_charts(document, pdf):
             for sheet, title in chart_titles(document) if not title or " ".join(title.split()) not in text]
 
 
-def run(office, workbook, out_dir, expected=None):
+def run(office, workbook, out_dir, expected=None, full=False):
     document = office.load(workbook)
     try:
         document.calculateAll()
@@ -104,6 +104,9 @@ def run(office, workbook, out_dir, expected=None):
         print("%s -> %s" % (workbook, pdf))
         for name, shown, unit in key_results(document):
             print("  %-32s %s %s" % (name, shown, unit))
+            if full:  # the unrounded value, as example_results.tsv stores it
+                cell = document.NamedRanges.getByName(name).ReferredCells.getCellByPosition(0, 0)
+                print("\t".join([os.path.basename(workbook), name, repr(cell.getValue())]))
         problems = ["%s %s shows %s" % error for error in error_cells(document)]
         if expected is not None:
             problems += regressions(document, expected.get(os.path.basename(workbook), []))
@@ -121,6 +124,7 @@ def main():
     parser.add_argument("--out", required=True, help="folder for the PDFs")
     parser.add_argument("--expect", help="tab-separated expected key results: workbook, name, value, "
                         "relative tolerance, note; also checks that every chart is in the PDF")
+    parser.add_argument("--full", action="store_true", help="also print each key result unrounded, tab-separated")
     parser.add_argument("workbooks", nargs="+")
     args = parser.parse_args()
     os.makedirs(args.out, exist_ok=True)
@@ -133,7 +137,7 @@ def main():
     ok = True
     with Office(args.oxt) as office:
         for workbook in args.workbooks:
-            ok = run(office, workbook, args.out, expected) and ok
+            ok = run(office, workbook, args.out, expected, args.full) and ok
     if not ok:
         print("some workbooks have problems (see above)", file=sys.stderr)
         return 1
