@@ -6,7 +6,7 @@ invented here.
 from scenario import (A1, A2, ALBEDO, AZIMUTH, B0, CLIENT, DAILY_DRAW_LITRES, DAYS_IN_MONTH, ETA0, FLOW_PER_M2,
                       H_HORIZONTAL_MJ, LATITUDE, MODULE_AREA, MODULES, MONTHS, SCENARIO, T_AMBIENT_MEAN, T_MAINS,
                       T_SET, TANK_VOLUME, TILT)
-from workbook import CAUTIONS, ROW_HEIGHT, Column, Sheet, column_letter
+from workbook import CAUTIONS, ROW_HEIGHT, Column, Sheet, column_letter, mark_point
 
 FILE = "collector-sizing.fods"
 
@@ -67,24 +67,6 @@ class SizingSheet(Sheet):
         self.sheet.getCellByPosition(column, first - 1).setFormula("=" + self.expand(formula))
 
 
-def mark_point(chart, series):
-    """Draws one series of an XY chart as large diamonds without a line (a marked point). The old chart API
-    counts the x values as row 0, so the first y series is 1."""
-    from com.sun.star.awt import Size
-    from com.sun.star.drawing.LineStyle import NONE
-    row = chart.Diagram.getDataRowProperties(series)
-    row.LineStyle = NONE
-    row.SymbolType = 1          # com.sun.star.chart.ChartSymbolType.SYMBOL1, a diamond
-    row.SymbolSize = Size(550, 550)
-    row.LineColor = 0xC00000    # the symbol takes the series colour
-    row.FillColor = 0xC00000
-
-
-def page_break(s):
-    """Starts a new printed page at the current row, so that no chart is cut by a page break."""
-    s.sheet.Rows.getByIndex(s.row).IsStartOfNewPage = True
-
-
 def build(document):
     sheet = document.Sheets.getByIndex(0)
     sheet.Name = "Collector sizing"
@@ -127,7 +109,7 @@ def build(document):
     s.space()
 
     # -- 3 -------------------------------------------------------------------------------------------------
-    page_break(s)
+    s.page_break()
     s.heading("3  Hot-water load of the laundry")
     s.note("Method: STORE_WATER gives the heat to warm a volume of water from the mains to the set-point with "
            "the density and enthalpy of IAPWS-IF97. It takes the volume at the start (mains) temperature, while "
@@ -189,7 +171,7 @@ def build(document):
     s.space()
 
     # -- 5 -------------------------------------------------------------------------------------------------
-    page_break(s)
+    s.page_break()
     s.heading("5  Monthly f-chart of the proposed field")
     s.note("Method: the f-chart for liquid systems (Klein, Beckman & Duffie): FCHART_X and FCHART_Y per month, "
            "X corrected with FCHART_STORAGE_CORR for the store size and FCHART_DHW_CORR for water heating, then "
@@ -255,7 +237,7 @@ def build(document):
     s.space()
 
     # -- 6 -------------------------------------------------------------------------------------------------
-    page_break(s)
+    s.page_break()
     s.heading("6  Annual solar fraction against collector area")
     s.note("Method: the chain of section 5 repeated for other field sizes with the same store, so both the area "
            "and the storage correction change. The options must keep the storage per m² within 37.5..300 l/m²: "
@@ -298,7 +280,7 @@ def build(document):
     s.space()
 
     # -- 7 -------------------------------------------------------------------------------------------------
-    page_break(s)
+    s.page_break()
     s.heading("7  Stagnation check")
     s.note("Method: COLL_STAGNATION_TEMP finds the mean fluid temperature at which the efficiency curve of "
            "section 4 falls to zero: the collector in full sun with no heat drawn (pump stopped, store at its "

@@ -45,7 +45,7 @@ import random
 from com.sun.star.table import CellRangeAddress
 
 import scenario as sc
-from workbook import (BOLD, CAUTIONS, HEADING_COLOUR, INPUT_COLOUR, RESULT_COLOUR, ROW_HEIGHT, Column, Sheet,
+from workbook import (BOLD, CAUTIONS, HEADING_COLOUR, RESULT_COLOUR, ROW_HEIGHT, Column, Sheet,
                       column_letter)
 
 FILE = "hourly-year.fods"
@@ -202,86 +202,6 @@ def invented_hourly_year():
 
 
 # -- layout helpers --------------------------------------------------------------
-class WideSheet(Sheet):
-    """A Sheet whose rows are coloured and whose full-width texts (title, notes) are wrapped across all its
-    columns; it also remembers blocks of rows that should not be split across printed pages."""
-
-    def __init__(self, document, sheet, widths):
-        Sheet.__init__(self, document, sheet, widths)
-        self.blocks = []
-
-    def _full_width(self, text_or_formula, characters_per_line=None, last_column=None):
-        if characters_per_line is None:
-            characters_per_line = int(sum(self.widths) / 205)  # about 2 mm per character at 10 pt
-        if last_column is None:
-            last_column = len(self.widths) - 1
-        return Sheet._full_width(self, text_or_formula, characters_per_line, last_column)
-
-    def _row(self, key, label, unit, note, colour):
-        Sheet._row(self, key, label, unit, note, colour)
-        self._fill(colour)  # across every column: the note runs on over the empty cells to the right
-
-    def keep(self, first_row):
-        """Rows first_row .. the last one written belong on one printed page."""
-        self.blocks.append((first_row, self.row - 1))
-
-    def labels(self, key, header, values, column, first_row):
-        """A column of row labels (not inputs) under a header, registered as a table column."""
-        self.columns[key] = (column, first_row, first_row + len(values) - 1)
-        cell = self.sheet.getCellByPosition(column, first_row - 1)
-        cell.setString(header)
-        cell.CharWeight = BOLD
-        cell.CellBackColor = HEADING_COLOUR
-        block = self.sheet.getCellRangeByPosition(column, first_row, column, first_row + len(values) - 1)
-        block.setDataArray(tuple((v,) for v in values))
-        block.CellBackColor = HEADING_COLOUR
-
-    def array_columns(self, columns, beside, first_column):
-        """Formula columns over the rows of the table column `beside` (e.g. one written by fill_down), each
-        column one array formula: the file stores the formula once per column instead of once per cell."""
-        _, first, last = self.columns[beside]
-        for offset, column in enumerate(columns):
-            index = first_column + offset
-            header = self.sheet.getCellByPosition(index, first - 1)
-            header.setString("%s [%s]" % (column.header, column.unit) if column.unit else column.header)
-            header.CharWeight = BOLD
-            header.IsTextWrapped = True
-            header.CellBackColor = HEADING_COLOUR
-            block = self.sheet.getCellRangeByPosition(index, first, index, last)
-            block.setArrayFormula("=" + self.expand(column.formula))
-            block.NumberFormat = self.number_format(column.number_format)
-            block.CellBackColor = RESULT_COLOUR
-            self.columns[column.key] = (index, first, last)
-
-    def colour_columns(self, keys):
-        """Input (values) columns yellow, formula columns green, as Sheet.table does (fill_down does not)."""
-        for key, colour in keys:
-            column, first, last = self.columns[key]
-            self.sheet.getCellRangeByPosition(column, first, column, last).CellBackColor = colour
-
-    def paginate(self, last_row):
-        """A manual page break before each kept block that would otherwise run over a page end. Calc does not
-        lay out the pages of a hidden document, so the pages are counted here from the row heights and the
-        page style (printed at 100 %: the sheet is laid out to fit the page width)."""
-        style = self.document.StyleFamilies.getByName("PageStyles").getByName(self.sheet.PageStyle)
-        usable = style.Height - style.TopMargin - style.BottomMargin - 200  # 2 mm to spare
-        for on, height, distance in ((style.HeaderIsOn, style.HeaderHeight, style.HeaderBodyDistance),
-                                     (style.FooterIsOn, style.FooterHeight, style.FooterBodyDistance)):
-            if on:
-                usable -= height + distance
-        rows = self.sheet.Rows
-        for first, last in self.blocks:
-            top = 0  # height used on the current page before row `first`
-            for row in range(0, first):
-                height = rows.getByIndex(row).Height
-                if rows.getByIndex(row).IsStartOfNewPage or top + height > usable:
-                    top = 0
-                top += height
-            block = sum(rows.getByIndex(row).Height for row in range(first, last + 1))
-            if top + block > usable and block <= usable and first <= last_row:
-                rows.getByIndex(first).IsStartOfNewPage = True
-
-
 def page_style(document, name, landscape):
     styles = document.StyleFamilies.getByName("PageStyles")
     if not styles.hasByName(name):
@@ -317,7 +237,7 @@ def build(document):
     data_sheet = sheets.getByName(DATA)
     data_sheet.PageStyle = page_style(document, "Hourly year data", landscape=False)
 
-    r = WideSheet(document, report_sheet, widths=(7600, 2300, 2100, 2300, 2300, 2300, 2300, 2300, 2300))
+    r = Sheet(document, report_sheet, widths=(7600, 2300, 2100, 2300, 2300, 2300, 2300, 2300, 2300))
     r.title("Hourly year – %s (invented)" % sc.CLIENT, sc.SCENARIO + " This workbook simulates the proposed "
             "system hour by hour over an invented year of weather (sheet \"%s\") with SIM_YEAR and sets the "
             "monthly f-chart estimate of the same system beside it." % DATA)
@@ -649,7 +569,7 @@ def build(document):
     r.keep(mark)
 
     report_sheet.setPrintAreas((cell_range(report_sheet, 0, 0, len(r.widths) - 1, r.row - 1),))
-    r.paginate(r.row - 1)
+    r.paginate()
     # Calc gives a formula cell the format it infers (here 0.00 % for a difference of percentages) when it first
     # calculates it, over the format set before: set it again after a calculation.
     document.calculateAll()
@@ -658,7 +578,7 @@ def build(document):
 
 def build_data_sheet(document, sheet, r):
     """The sheet of 8760 hours: invented weather (yellow) and the hourly formulas (green)."""
-    d = WideSheet(document, sheet, widths=(3800, 2100, 2100, 2100, 2300, 2300, 2300, 2300))
+    d = Sheet(document, sheet, widths=(3800, 2100, 2100, 2100, 2300, 2300, 2300, 2300))
     d.title("Hourly data – invented year %d for %s" % (YEAR, sc.TOWN), "INVENTED hourly weather, not measured "
             "data of any place: made by a deterministic model in hourly_year.py (seeded pseudo-random cloudiness "
             "on a clear-sky clearness index over a simple sun geometry, Erbs diffuse fraction, monthly means tuned "
@@ -682,7 +602,6 @@ def build_data_sheet(document, sheet, r):
         Column("dhi", "DHI", "W/m²", values=[row[2] for row in rows], number_format="0.0"),
         Column("t_amb", "Ambient", "°C", values=[row[3] for row in rows], number_format="0.0"),
     ], HOURS)
-    d.colour_columns([(key, INPUT_COLOUR) for key in ("dt", "ghi", "dhi", "t_amb")])
     d.array_columns([
         Column("g_t", "On the plane", "W/m²", formula="SUN_TILTED({ghi};{dhi};{lat};{lon};{utc};{dt};{tilt};{az};"
                "{albedo};{model})", number_format="0.0"),

@@ -76,46 +76,11 @@ def runs_table(s, names, rows, header="Run"):
     return first, s.row - 1
 
 
-def chart(s, blocks, *args, keep_from=None, **kwargs):
-    """Sheet.chart, remembering the rows from `keep_from` (default: the chart's first row) to the chart's
-    last row as one block to keep on one printed page (see keep_on_one_page)."""
-    first = s.row if keep_from is None else keep_from
-    result = s.chart(*args, **kwargs)
-    blocks.append((first, s.row - 1))
-    return result
-
-
-def keep_on_one_page(s, blocks, margin=0.95):
-    """Manual page breaks so that no block of rows (first, last) – a chart with its lead-in, a heading with
-    its note – is cut by a page break.
-    Calc does not report its automatic breaks reliably through the API, so the page is estimated here:
-    the printable height of the page style divided by the scale that fits the sheet's columns to one page
-    wide. A block is left alone only when it ends within `margin` of the first page after the last manual
-    break (where the estimate cannot have drifted); otherwise it starts a new page."""
-    style = s.document.StyleFamilies.getByName("PageStyles").getByName(s.sheet.PageStyle)
-    height = style.Height - style.TopMargin - style.BottomMargin
-    height -= (style.HeaderHeight if style.HeaderIsOn else 0) + (style.FooterHeight if style.FooterIsOn else 0)
-    scale = min(1.0, (style.Width - style.LeftMargin - style.RightMargin) / sum(s.widths))
-    page = margin * height / scale
-    rows = s.sheet.Rows
-    page_start = 0
-    for first, last in sorted(blocks):
-        for row in range(first, page_start, -1):
-            if rows.getByIndex(row).IsStartOfNewPage:
-                page_start = row
-                break
-        end = sum(rows.getByIndex(row).Height for row in range(page_start, last + 1))
-        if end > page:
-            rows.getByIndex(first).IsStartOfNewPage = True
-            page_start = first
-
-
 # -- the workbook --------------------------------------------------------------------------------------
 def build(document):
     sheet = document.Sheets.getByIndex(0)
     sheet.Name = "Tank sizing"
     s = Sheet(document, sheet)
-    blocks = []  # rows to keep on one printed page
     s.title("Tank sizing – %s (invented)" % sc.CLIENT, sc.SCENARIO)
 
     # 1 ---------------------------------------------------------------------------------------------
@@ -137,12 +102,14 @@ def build(document):
              "check: must be 1", number_format="0.000")
     s.result("peak_litres", "Largest hourly draw", "MAX({litres_h})", "l/h", number_format="0")
     s.result("draw_hours", "Hours with a draw", 'COUNTIF({share};">0")', "h/day", number_format="0")
-    chart(s, blocks, "draw_profile", "Hot-water draw over the day (invented profile)", "hour", ["litres_h"],
+    first = s.row
+    s.chart("draw_profile", "Hot-water draw over the day (invented profile)", "hour", ["litres_h"],
             "hour of the day", "draw [l/h]", kind="column", height_rows=12)
+    s.keep(first)
     s.space()
 
     # 2 ---------------------------------------------------------------------------------------------
-    blocks.append((s.row, s.row + 1))  # keep the heading with its method note
+    s.blocks.append((s.row, s.row + 1))  # keep the heading with its method note
     s.heading("2  Energy of a day's draw, and what the store should hold")
     s.note("Method: STORE_WATER (IAPWS-IF97 density and enthalpy of water) heats the day's water from the "
            "mains temperature to the set-point. STORE_WATER takes the volume at its start temperature, so the "
@@ -213,8 +180,10 @@ def build(document):
                     number_format="0"),
              Column("kwh_thick", "Standing loss per day", "kWh/day", formula="{loss_thick}*24/1000",
                     number_format="0.00")], 6)
-    chart(s, blocks, "ua_thickness", "Heat-loss coefficient vs insulation thickness", "thick", ["ua_thick"],
+    first = s.row
+    s.chart("ua_thickness", "Heat-loss coefficient vs insulation thickness", "thick", ["ua_thick"],
             "insulation thickness [m]", "UA [W/K]", height_rows=12)
+    s.keep(first)
     s.space()
 
     # 5 ---------------------------------------------------------------------------------------------
@@ -236,9 +205,9 @@ def build(document):
                     "{v_tank};{hours}*3600)", number_format="0.0"),
              Column("q_lost", "Heat lost, insulated", "kWh", formula="-STORE_WATER({v_tank};{t_start};{t_ins})/"
                     + J_PER_KWH, number_format="0.00")], 13)
-    chart(s, blocks, "cooldown", "Tank temperature standing without draws", "hours", ["t_ins", "t_bare"],
-            "hours since the last draw [h]", "mixed tank temperature [°C]", height_rows=16,
-          keep_from=cooldown_block)
+    s.chart("cooldown", "Tank temperature standing without draws", "hours", ["t_ins", "t_bare"],
+            "hours since the last draw [h]", "mixed tank temperature [°C]", height_rows=16)
+    s.keep(cooldown_block)
     s.result("temperature_after_night", "Tank temperature after the night", "STORE_COOLDOWN({t_start};{t_room};"
              "{tank_ua};{v_tank};{night_hours}*3600)", "°C", "insulated tank", number_format="0.00", named=True)
     s.result("night_loss", "Heat lost over the night", "-STORE_WATER({v_tank};{t_start};{temperature_after_night})/"
@@ -336,8 +305,9 @@ def build(document):
                "{pcm_melt};{pcm_latent};{t_low};{t_hot})/3600", number_format="0.0"),
         Column("ratio_kg", "PCM ÷ water, per kg", "–", formula="{pcm_kg}/{water_kg}", number_format="0.00")],
         10, "t_low")
-    chart(s, blocks, "pcm_vs_water", "Heat stored per m³, charged at the store's charged temperature", "t_low",
-          ["water_m3", "pcm_m3"], "discharged to [°C]", "energy [kWh/m³]", height_rows=16, keep_from=pcm_block)
+    s.chart("pcm_vs_water", "Heat stored per m³, charged at the store's charged temperature", "t_low",
+            ["water_m3", "pcm_m3"], "discharged to [°C]", "energy [kWh/m³]", height_rows=16)
+    s.keep(pcm_block)
     s.note("Reading: the material gains most over narrow swings that cross its melting point; for swings above "
            "the melting point (discharged to 60 or 65 °C) it stores only the sensible heat of its liquid and "
            "does no better than water. Containers, heat exchange into and out of the solid, and ageing of the "
@@ -367,4 +337,4 @@ def build(document):
         "Pipe runs outdoors need UV-resistant jackets and insulation rated for the collector's stagnation "
         "temperature; the losses above exclude fittings, valves and supports, which add to them.",
     ])
-    keep_on_one_page(s, blocks)
+    s.paginate()

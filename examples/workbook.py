@@ -71,6 +71,7 @@ class Sheet:
         self.cells = {}     # key -> absolute address of a single cell
         self.columns = {}   # key -> (column index, first row, last row), 0-based
         self.widths = widths
+        self.blocks = []    # (first, last) rows to keep on one printed page
         for column, width in enumerate(widths):
             sheet.Columns.getByIndex(column).Width = width  # 1/100 mm
         page = document.StyleFamilies.getByName("PageStyles").getByName(sheet.PageStyle)
@@ -119,11 +120,15 @@ class Sheet:
             name, "$'%s'.%s" % (self.sheet.Name, self._absolute(column, row)), address, 0)
 
     # -- rows -----------------------------------------------------------------
-    def _full_width(self, text_or_formula, characters_per_line=80, last_column=3):
-        """Text across columns A..last of the current row, wrapped, the row made tall enough."""
+    def _full_width(self, text_or_formula, characters_per_line=None, last_column=None):
+        """Text across all the sheet's columns of the current row, wrapped, the row made tall enough."""
+        last_column = len(self.widths) - 1 if last_column is None else last_column
+        if characters_per_line is None:
+            characters_per_line = int(sum(self.widths[:last_column + 1]) / 205)  # about 2 mm a character at 10 pt
         cells = self.sheet.getCellRangeByPosition(0, self.row, last_column, self.row)
         cells.merge(True)
         cells.IsTextWrapped = True
+        cells.VertJustify = 1  # com.sun.star.table.CellVertJustify2.TOP: the text starts at the top of its row
         cell = self._cell(0)
         if text_or_formula.startswith("="):
             cell.setFormula(text_or_formula)
@@ -151,7 +156,7 @@ class Sheet:
         self._cell(0).setString(label)
         self._cell(2).setString(unit)
         self._cell(3).setString(note)
-        self._fill(colour, last=3)
+        self._fill(colour)  # across every column: the note runs on over the empty cells to its right
         if key:
             assert key not in self.cells and key not in self.columns, key
             self.cells[key] = self._absolute(1, self.row)
@@ -254,12 +259,77 @@ class Sheet:
             if column.values is not None:
                 assert len(column.values) == rows, column.key
                 block.setDataArray(tuple((v,) for v in column.values))
+                block.CellBackColor = INPUT_COLOUR
             else:
                 self._cell(index, first).setFormula("=" + self.expand(column.formula, first))
                 block.fillAuto(TO_BOTTOM, 1)
+                block.CellBackColor = RESULT_COLOUR
             block.NumberFormat = self.number_format(column.number_format)
         self.row = last + 1
         return first, last
+
+    def labels(self, key, header, values, column, first_row):
+        """A column of row labels (not inputs: heading colour) under a header, usable as a table column."""
+        self.columns[key] = (column, first_row, first_row + len(values) - 1)
+        cell = self._cell(column, first_row - 1)
+        cell.setString(header)
+        cell.CharWeight = BOLD
+        cell.CellBackColor = HEADING_COLOUR
+        block = self.sheet.getCellRangeByPosition(column, first_row, column, first_row + len(values) - 1)
+        block.setDataArray(tuple((v,) for v in values))
+        block.CellBackColor = HEADING_COLOUR
+
+    def array_columns(self, columns, beside, first_column):
+        """Formula columns over the rows of the table column `beside`, each one array formula: a file stores
+        the formula once per column instead of once per cell (an 8760-row year stays a quarter smaller)."""
+        _, first, last = self.columns[beside]
+        for offset, column in enumerate(columns):
+            index = first_column + offset
+            header = self._cell(index, first - 1)
+            header.setString("%s [%s]" % (column.header, column.unit) if column.unit else column.header)
+            header.CharWeight = BOLD
+            header.IsTextWrapped = True
+            header.CellBackColor = HEADING_COLOUR
+            block = self.sheet.getCellRangeByPosition(index, first, index, last)
+            block.setArrayFormula("=" + self.expand(column.formula))
+            block.NumberFormat = self.number_format(column.number_format)
+            block.CellBackColor = RESULT_COLOUR
+            self.columns[column.key] = (index, first, last)
+
+    # -- printed pages --------------------------------------------------------
+    def page_break(self):
+        """The current row starts a new printed page."""
+        self.sheet.Rows.getByIndex(self.row).IsStartOfNewPage = True
+
+    def keep(self, first_row):
+        """Rows first_row .. the last one written belong on one printed page (see paginate)."""
+        self.blocks.append((first_row, self.row - 1))
+
+    def paginate(self):
+        """A manual page break before each kept block that would otherwise run over the end of a page.
+        Calc lays out no pages for a hidden document, so they are counted here from the row heights and the
+        page style, at the scale that fits the used columns to one page wide."""
+        style = self.document.StyleFamilies.getByName("PageStyles").getByName(self.sheet.PageStyle)
+        usable = style.Height - style.TopMargin - style.BottomMargin - 200  # 2 mm to spare
+        for on, height, distance in ((style.HeaderIsOn, style.HeaderHeight, style.HeaderBodyDistance),
+                                     (style.FooterIsOn, style.FooterHeight, style.FooterBodyDistance)):
+            if on:
+                usable -= height + distance
+        cursor = self.sheet.createCursor()
+        cursor.gotoEndOfUsedArea(False)
+        used_width = sum(self.sheet.Columns.getByIndex(c).Width for c in range(cursor.RangeAddress.EndColumn + 1))
+        page = usable / min(1.0, (style.Width - style.LeftMargin - style.RightMargin) / used_width)
+        rows = self.sheet.Rows
+        for first, last in sorted(self.blocks):
+            top = 0  # height used on the page before row `first`
+            for row in range(first):
+                height = rows.getByIndex(row).Height
+                if rows.getByIndex(row).IsStartOfNewPage or top + height > page:
+                    top = 0
+                top += height
+            block = sum(rows.getByIndex(row).Height for row in range(first, last + 1))
+            if top + block > page and block <= page:
+                rows.getByIndex(first).IsStartOfNewPage = True
 
     # -- charts ---------------------------------------------------------------
     def chart(self, name, title, x_key, y_keys, x_title, y_title, kind="xy", height_rows=18,
@@ -298,3 +368,16 @@ class Sheet:
         diagram.YAxisTitle.String = y_title
         self.row += height_rows
         return chart
+
+
+def mark_point(chart, series):
+    """Draws one series of an XY chart as large red diamonds without a line (a marked point). The chart API
+    counts the x values as series 0, so the first y series is 1."""
+    from com.sun.star.awt import Size
+    from com.sun.star.drawing.LineStyle import NONE
+    row = chart.Diagram.getDataRowProperties(series)
+    row.LineStyle = NONE
+    row.SymbolType = 1          # com.sun.star.chart.ChartSymbolType.SYMBOL1, a diamond
+    row.SymbolSize = Size(550, 550)
+    row.LineColor = 0xC00000    # the symbol takes the series colour
+    row.FillColor = 0xC00000
