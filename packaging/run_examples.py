@@ -60,7 +60,8 @@ def chart_titles(document):
 
 
 def read_expected(path):
-    """{workbook file: [(name, expected value, relative tolerance, note)]} from a tab-separated file."""
+    """{workbook file: [(name, expected value, relative tolerance, note)]} from a tab-separated file; the
+    name "charts" stands for the number of charts in the workbook."""
     expected = {}
     with open(path, encoding="utf-8") as f:
         for line in f:
@@ -75,6 +76,10 @@ def regressions(document, expected):
     """Messages for each expected key result that is missing or off by more than its tolerance."""
     problems = []
     for name, want, tolerance, note in expected:
+        if name == "charts":  # not a named cell: the number of charts in the workbook
+            if len(chart_titles(document)) != want:
+                problems.append("%d charts, expected %d" % (len(chart_titles(document)), want))
+            continue
         if not document.NamedRanges.hasByName(name):
             problems.append("%s: no such named result" % name)
             continue
@@ -102,6 +107,7 @@ def run(office, workbook, out_dir, expected=None, full=False):
         pdf = os.path.join(out_dir, stem + ".pdf")
         shutil.copyfile(pdf_in_office, pdf)
         print("%s -> %s" % (workbook, pdf))
+        print("  %-32s %d" % ("charts", len(chart_titles(document))))
         for name, shown, unit in key_results(document):
             print("  %-32s %s %s" % (name, shown, unit))
             if full:  # the unrounded value, as example_results.tsv stores it
