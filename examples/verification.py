@@ -112,6 +112,40 @@ def _table_cases():
         lambda r: 0.01 / math.sin(math.radians(r[4])), "absolute",
         "astropy 5.2 apparent sun position, clock read as UTC (tolerance 0.01° / sin(zenith))",
         keep=lambda r: 10 < r[4] < 170)
+    add("WATER_PRANDTL", "water_liquid.txt", lambda r: ((r[0], r[1]), r[5] * r[3] / r[6]), 1e-12, "relative",
+        water + "; μ·cp/λ of the IAPWS 2008 and 2011 formulations")
+    add("STORE_TANK_VOLUME", "store_water.txt", lambda r: ((-r[3], r[1], r[2]), r[0]), 1e-11, "relative",
+        iapws + "the volume whose cooling from T_hot to T_cold releases the energy (IF97 region 1)",
+        keep=lambda r: r[1] > r[2])
+    c2_rounding = 4e-10  # CODATA's printed c1, c2 against h·c/k (tests/unit/test_radiation.cpp)
+    add("RAD_SPECTRAL", "radiation_planck.txt", lambda r: ((r[0], r[1]), r[2]),
+        lambda r: 1e-10 + c2_rounding * (1 + 14387.768775039337 / (r[0] * (r[1] + 273.15))), "relative",
+        "astropy 5.2 BlackBody (CODATA 2018) times π; tolerance 1e-10 + 4e-10·(1 + c2/(λT)) for the printed "
+        "digits of c2")
+    add("COND_ANNULAR_FIN_EFF", "annular_fin_efficiency.txt", lambda r: ((r[0], r[1], r[2], r[3], r[4]), r[5]),
+        1e-9, "relative", "Gardner (1945) as in Incropera et al., 6th ed., Table 3.5, with modified Bessel "
+        "functions in 120-digit decimal arithmetic")
+    add("DIM_RAYLEIGH", "dim_rayleigh.txt",
+        lambda r: ((r[1], r[2], r[3], '"air"' if r[0] == 1 else '"water"'), r[4]),
+        lambda r: 1e-2 if r[0] == 1 else 1e-4, "relative",
+        iapws + "IF97 water, Lemmon et al. real-gas air (Solarith's air is ideal: tolerance 1 %)")
+    add("CONV_PIPE_COEFF", "conv_pipe_coeff.txt",
+        lambda r: (('"air"' if r[0] == 1 else '"water"', r[1], r[2], r[3]) + ((r[4],) if r[4] > 0 else ()), r[7]),
+        lambda r: 1e-2 if r[0] == 1 else 1e-5, "relative",
+        iapws + "properties with the pipe correlations written out independently in Python (air: 1 %)")
+    add("SUN_DECLINATION", "sun_daily.txt", lambda r: ((r[1],), r[2]), 0.6, "absolute",
+        "astropy 5.2 apparent declination at 12:00 UT1, 2018–2021 (tolerance: Spencer's series, see FN_METHOD)")
+    add("SUN_EQ_OF_TIME", "sun_daily.txt", lambda r: ((r[1],), r[3]), 1.0, "absolute",
+        "astropy 5.2 apparent hour angle of the sun at 12:00 UT1, in minutes (tolerance: Spencer's series)")
+
+    def incidence(r, tilt=35, azimuth=180):
+        z, a = math.radians(r[4]), math.radians(r[5])
+        c = (math.cos(z) * math.cos(math.radians(tilt))
+             + math.sin(z) * math.sin(math.radians(tilt)) * math.cos(a - math.radians(azimuth)))
+        return (r[0], r[1], r[2], r[3], tilt, azimuth), math.degrees(math.acos(max(-1.0, min(1.0, c))))
+    add("SUN_INCIDENCE", "sun_position.txt", incidence, 0.01, "absolute",
+        "angle between astropy 5.2's sun direction (clock as UTC) and the normal of a plane tilted 35° facing "
+        "south")
     return cases
 
 
