@@ -412,11 +412,7 @@ def build(document):
         column = 1 + offset
         r.columns[key] = (column, first, first + 11)
         r.cells["year_" + key[4:]] = r._absolute(column, first + 12)
-        cell = r.sheet.getCellByPosition(column, header_row)
-        cell.setString("%s [%s]" % (header, unit) if unit else header)
-        cell.CharWeight = BOLD
-        cell.IsTextWrapped = True
-        cell.CellBackColor = HEADING_COLOUR
+        r.header(column, header_row, header, unit)
         r.sheet.getCellRangeByPosition(column, first, column, first + 12).NumberFormat = r.number_format(code)
     r.sheet.Rows.getByIndex(header_row).Height = 2 * ROW_HEIGHT
     block = r.sheet.getCellRangeByPosition(1, first, 8, first + 12)

@@ -206,22 +206,30 @@ class Sheet:
         self.row += rows
 
     # -- tables ---------------------------------------------------------------
-    def table(self, columns, rows, first_column=0):
-        """A table of `rows` rows under a header row "header [unit]". Input columns are yellow, formula
-        columns green. Returns the 0-based (first, last) data rows."""
-        header_row, first, last = self.row, self.row + 1, self.row + rows
+    def header(self, column, row, text, unit=""):
+        """A table's column header "text [unit]", bold and wrapped, in the heading colour."""
+        cell = self._cell(column, row)
+        cell.setString("%s [%s]" % (text, unit) if unit else text)
+        cell.CharWeight = BOLD
+        cell.IsTextWrapped = True
+        cell.CellBackColor = HEADING_COLOUR
+
+    def _header_row(self, columns, first_column, first, last):
+        """Headers of a table whose data rows are first..last, the columns registered for {key}."""
         for offset, column in enumerate(columns):
             index = first_column + offset
             assert column.key not in self.cells and column.key not in self.columns, column.key
             self.columns[column.key] = (index, first, last)
-            header = self._cell(index, header_row)
-            header.setString("%s [%s]" % (column.header, column.unit) if column.unit else column.header)
-            header.CharWeight = BOLD
-            header.IsTextWrapped = True
-            header.CellBackColor = HEADING_COLOUR
+            self.header(index, first - 1, column.header, column.unit)
             if column.width:
                 self.sheet.Columns.getByIndex(index).Width = column.width
-        self.sheet.Rows.getByIndex(header_row).Height = 2 * ROW_HEIGHT
+        self.sheet.Rows.getByIndex(first - 1).Height = 2 * ROW_HEIGHT
+
+    def table(self, columns, rows, first_column=0):
+        """A table of `rows` rows under a header row "header [unit]". Input columns are yellow, formula
+        columns green. Returns the 0-based (first, last) data rows."""
+        first, last = self.row + 1, self.row + rows
+        self._header_row(columns, first_column, first, last)
         for offset, column in enumerate(columns):
             index = first_column + offset
             block = self.sheet.getCellRangeByPosition(index, first, index, last)
@@ -240,19 +248,9 @@ class Sheet:
     def fill_down(self, columns, rows, first_column=0):
         """As table(), for long tables: each formula is written once and filled down (Calc's fill is far
         faster than writing thousands of formulas one by one)."""
-        header_row, first, last = self.row, self.row + 1, self.row + rows
-        for offset, column in enumerate(columns):
-            index = first_column + offset
-            self.columns[column.key] = (index, first, last)
-            header = self._cell(index, header_row)
-            header.setString("%s [%s]" % (column.header, column.unit) if column.unit else column.header)
-            header.CharWeight = BOLD
-            header.IsTextWrapped = True
-            header.CellBackColor = HEADING_COLOUR
-            if column.width:
-                self.sheet.Columns.getByIndex(index).Width = column.width
-        self.sheet.Rows.getByIndex(header_row).Height = 2 * ROW_HEIGHT
         from com.sun.star.sheet.FillDirection import TO_BOTTOM
+        first, last = self.row + 1, self.row + rows
+        self._header_row(columns, first_column, first, last)
         for offset, column in enumerate(columns):
             index = first_column + offset
             block = self.sheet.getCellRangeByPosition(index, first, index, last)
@@ -285,11 +283,7 @@ class Sheet:
         _, first, last = self.columns[beside]
         for offset, column in enumerate(columns):
             index = first_column + offset
-            header = self._cell(index, first - 1)
-            header.setString("%s [%s]" % (column.header, column.unit) if column.unit else column.header)
-            header.CharWeight = BOLD
-            header.IsTextWrapped = True
-            header.CellBackColor = HEADING_COLOUR
+            self.header(index, first - 1, column.header, column.unit)
             block = self.sheet.getCellRangeByPosition(index, first, index, last)
             block.setArrayFormula("=" + self.expand(column.formula))
             block.NumberFormat = self.number_format(column.number_format)
