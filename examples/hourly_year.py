@@ -592,7 +592,7 @@ def build_data_sheet(document, sheet, r):
     d.cells["profile"] = "$%s.%s" % (REPORT, r.range("profile"))
     d.cells["mains"] = "$%s.%s" % (REPORT, r.range("t_mains"))
     rows = invented_hourly_year()
-    d.fill_down([
+    d.table([
         Column("dt", "Local date and time", "", values=[row[0] for row in rows], number_format="YYYY-MM-DD HH:MM"),
         Column("ghi", "GHI", "W/m²", values=[row[1] for row in rows], number_format="0.0"),
         Column("dhi", "DHI", "W/m²", values=[row[2] for row in rows], number_format="0.0"),

@@ -227,7 +227,7 @@ class Sheet:
 
     def table(self, columns, rows, first_column=0):
         """A table of `rows` rows under a header row "header [unit]". Input columns are yellow, formula
-        columns green. Returns the 0-based (first, last) data rows."""
+        columns green (for thousands of rows see array_columns). Returns the 0-based (first, last) data rows."""
         first, last = self.row + 1, self.row + rows
         self._header_row(columns, first_column, first, last)
         for offset, column in enumerate(columns):
@@ -240,27 +240,6 @@ class Sheet:
             else:
                 for row in range(first, last + 1):
                     self._cell(index, row).setFormula("=" + self.expand(column.formula, row))
-                block.CellBackColor = RESULT_COLOUR
-            block.NumberFormat = self.number_format(column.number_format)
-        self.row = last + 1
-        return first, last
-
-    def fill_down(self, columns, rows, first_column=0):
-        """As table(), for long tables: each formula is written once and filled down (Calc's fill is far
-        faster than writing thousands of formulas one by one)."""
-        from com.sun.star.sheet.FillDirection import TO_BOTTOM
-        first, last = self.row + 1, self.row + rows
-        self._header_row(columns, first_column, first, last)
-        for offset, column in enumerate(columns):
-            index = first_column + offset
-            block = self.sheet.getCellRangeByPosition(index, first, index, last)
-            if column.values is not None:
-                assert len(column.values) == rows, column.key
-                block.setDataArray(tuple((v,) for v in column.values))
-                block.CellBackColor = INPUT_COLOUR
-            else:
-                self._cell(index, first).setFormula("=" + self.expand(column.formula, first))
-                block.fillAuto(TO_BOTTOM, 1)
                 block.CellBackColor = RESULT_COLOUR
             block.NumberFormat = self.number_format(column.number_format)
         self.row = last + 1
