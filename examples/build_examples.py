@@ -23,13 +23,9 @@ MODULES = ["quick_check", "collector_sizing", "tank_sizing", "hourly_year", "ver
 
 
 def workbooks():
-    """{file name: module} of every workbook whose module exists."""
-    found = {}
-    for name in MODULES:
-        if os.path.exists(os.path.join(HERE, name + ".py")):
-            module = importlib.import_module(name)
-            found[module.FILE] = module
-    return found
+    """{file name: module} of every workbook."""
+    modules = [importlib.import_module(name) for name in MODULES]
+    return {module.FILE: module for module in modules}
 
 
 def main():
