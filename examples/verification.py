@@ -55,13 +55,13 @@ def _spread(rows, count=ROWS_PER_TABLE):
 def _table_cases():
     """[(function, call, expected, tolerance, kind, source)] sampled from tests/reference/*.txt."""
     iapws = "python3-iapws: "
-    cases = []
+    found = []
 
     def add(function, file_name, make, tolerance, kind, source, keep=lambda r: True):
         for row in _spread([r for r in _rows(file_name) if keep(r)]):
             arguments, expected = make(row)
             row_tolerance = tolerance(row) if callable(tolerance) else tolerance
-            cases.append((function, _call(function, *arguments), expected, row_tolerance, kind,
+            found.append((function, _call(function, *arguments), expected, row_tolerance, kind,
                           "%s (tests/reference/%s)" % (source, file_name)))
 
     water = iapws + "IAPWS-IF97 region 1 (IAPWS R7-97(2012))"
@@ -146,12 +146,12 @@ def _table_cases():
     add("SUN_INCIDENCE", "sun_position.txt", incidence, 0.01, "absolute",
         "angle between astropy 5.2's sun direction (clock as UTC) and the normal of a plane tilted 35° facing "
         "south")
-    return cases
+    return found
 
 
 def _suite_cases():
     """[(function, call, expected, tolerance, kind, source)] from tests/calc/reference_cases.tsv."""
-    cases = []
+    found = []
     with open(os.path.join(ROOT, "tests", "calc", "reference_cases.tsv"), encoding="utf-8") as f:
         for line in f:
             if not line.strip() or line.startswith("#"):
@@ -160,14 +160,19 @@ def _suite_cases():
             call = formula[1:]
             function = call.split("(")[0]
             if expected.startswith('"'):
-                cases.append((function, call, expected[1:-1], 0, "same text", source))
+                found.append((function, call, expected[1:-1], 0, "same text", source))
             elif expected == "#VALUE!":
-                cases.append((function, call, "Err:519", 0, "same error", source + " (#VALUE! is Err:519)"))
+                found.append((function, call, "Err:519", 0, "same error", source + " (#VALUE! is Err:519)"))
             elif expected.startswith("Err:"):
-                cases.append((function, call, expected, 0, "same error", source))
+                found.append((function, call, expected, 0, "same error", source))
             else:
-                cases.append((function, call, float(expected), float(tolerance), "relative", source))
-    return cases
+                found.append((function, call, float(expected), float(tolerance), "relative", source))
+    return found
+
+
+def cases():
+    """Every row of the workbook: the suite's Calc cases, then the sampled reference tables."""
+    return _suite_cases() + _table_cases()
 
 
 def _check_row(s, row, case):
@@ -251,9 +256,9 @@ def build(document):
             "when |result − reference| ≤ tolerance, in the unit of the result; 'same error' rows check that "
             "impossible or out-of-range input is refused with the stated Calc error instead of a number.")
 
-    cases = _suite_cases() + _table_cases()
+    rows = cases()
     header_row = s.row + 5
-    first, last = header_row + 1, header_row + len(cases)
+    first, last = header_row + 1, header_row + len(rows)
     checks = "%s%d:%s%d" % ("H", first + 1, "H", last + 1)
     s.heading("Summary")
     s.result("verification_checks", "Reference checks", "ROWS(%s)" % checks, "rows",
@@ -271,7 +276,7 @@ def build(document):
         cell.setString(header)
         cell.CharWeight = 150
         cell.CellBackColor = 0xD9E1F2
-    for offset, case in enumerate(cases):
+    for offset, case in enumerate(rows):
         _check_row(s, first + offset, case)
     _formats(s, first, last)
     document.calculateAll()

@@ -91,7 +91,7 @@ def regressions(document, expected):
 
 
 def missing_charts(document, pdf):
-    """Titles of charts that do not show in the PDF's text, or a message if the workbook has no chart."""
+    """Messages for charts whose title does not show in the PDF's text (or that have no title)."""
     text = " ".join(subprocess.run(["pdftotext", pdf, "-"], capture_output=True, text=True, check=True).stdout.split())
     return ["chart '%s' on sheet %s is not in the PDF" % (title, sheet)
             for sheet, title in chart_titles(document) if not title or " ".join(title.split()) not in text]

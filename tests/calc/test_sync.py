@@ -90,7 +90,7 @@ class VerificationWorkbookInSync(unittest.TestCase):
         import sys
         sys.path.insert(0, os.path.join(SOURCE, "examples"))
         import verification
-        cases = verification._suite_cases() + verification._table_cases()
+        cases = verification.cases()
         workbook = read(os.path.join(SOURCE, "examples", verification.FILE))
         shown = re.findall(r"<text:p>(=[^<]*)</text:p>", workbook)
         formulas = [html.unescape(text) for text in shown]
