@@ -15,6 +15,7 @@ test suite checks against:
 """
 import math
 import os
+import re
 
 from workbook import FAIL_COLOUR, INPUT_COLOUR, RESULT_COLOUR, Sheet
 
@@ -158,7 +159,7 @@ def _suite_cases():
                 continue
             formula, expected, tolerance, source = line.rstrip("\n").split("\t")
             call = formula[1:]
-            function = call.split("(")[0]
+            function = re.search(r"([A-Z][A-Z0-9_]*)\(", call).group(1)  # the first function the formula calls
             if expected.startswith('"'):
                 found.append((function, call, expected[1:-1], 0, "same text", source))
             elif expected == "#VALUE!":
@@ -170,9 +171,19 @@ def _suite_cases():
     return found
 
 
+# The order of the families in the function reference (docs/functions.md).
+FAMILIES = ["RAD_", "COND_", "CONV_", "DIM_", "NU_", "WATER_", "AIR_", "GLYCOL_", "STORE_", "LOSS_", "SUN_", "COLL_",
+            "HX_", "FCHART_", "SIM_", "FN_"]
+
+
+def _family(function):
+    return next(i for i, prefix in enumerate(FAMILIES) if function.startswith(prefix))
+
+
 def cases():
-    """Every row of the workbook: the suite's Calc cases, then the sampled reference tables."""
-    return _suite_cases() + _table_cases()
+    """Every row of the workbook: the suite's Calc cases and the sampled reference tables, grouped by family,
+    the functions of a family in alphabetical order, each function's rows in the order of the test data."""
+    return sorted(_suite_cases() + _table_cases(), key=lambda case: (_family(case[0]), case[0]))
 
 
 def _check_row(s, row, case):
