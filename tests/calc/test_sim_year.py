@@ -4,7 +4,10 @@ into a sheet (8760 rows of weather and load), the formula entered over a
 13x8 range (monthly) and an 8760x5 range (hourly), and every cell compared
 with what the core gives for the same numbers (solarith-codegen evaluate).
 Also: the optional controls range omitted, given, and given with a blank
-cell; wrong row counts; FN_DIAGNOSE's message in a cell.
+cell; wrong row counts; FN_DIAGNOSE's message in a cell; each argument in
+turn replaced by hostile input (text, blank and error cells, 1e308 in a range,
+a million rows, a 1024-column row), which the generic hostile sheet cannot
+do for SIM_YEAR because its ranges are too long to write inline.
 
 The weather and load are INVENTED (smooth formulas, no climate file), the
 same kind of year as tests/unit/invented_year.hpp.
@@ -84,6 +87,19 @@ class SimYearInCalc(unittest.TestCase):
         data.getCellRangeByName("G3:I3").setDataArray((CONTROLS,))
         data.getCellRangeByName("G4:I4").setDataArray(((7.0, "", 95.0),))  # a blank cell among the controls
         data.getCellRangeByName("G5:I5").setDataArray((OTHER_CONTROLS,))
+        # Hostile blocks of the weather's shape (8760 x 3): one text cell, one error value, one huge value.
+        cls.doc.Sheets.insertNewByName("hostile", cls.doc.Sheets.getCount())
+        bad = cls.doc.Sheets.getByName("hostile")
+        for column, poison in ((0, "text"), (4, "error"), (8, "huge")):
+            block = bad.getCellRangeByPosition(column, 0, column + 2, HOURS - 1)
+            block.setDataArray(tuple(tuple(r) for r in cls.weather))
+            cell = bad.getCellByPosition(column + 1, 4000)
+            if poison == "text":
+                cell.setString("sunny")
+            elif poison == "error":
+                cell.setFormula("=1/0")
+            else:
+                cell.setValue(1e308)
 
     @classmethod
     def tearDownClass(cls):
@@ -146,6 +162,37 @@ class SimYearInCalc(unittest.TestCase):
         self.assertNotEqual(other[12][6], given[12][6], "other controls change the pump hours")
         blank = self.array_formula("blank control", "=SIM_YEAR(%s; $data.G4:$data.I4)" % RANGES, 13, 8)
         self.assertEqual(blank[0][0], ("error", 502), "a blank cell among the controls")
+
+    def test_hostile_arguments_are_errors_never_wrong_numbers(self):
+        """Each argument in turn replaced by what engineers type by mistake: the whole block shows an error
+        code (never a partial or non-finite table) and the office survives."""
+        arguments = [a.strip() for a in RANGES.split(";")]
+        replacements = {
+            "a text": '"warm"', "a number": "25", "a blank cell": "$data.Z1", "an error value": "1/0",
+            "text in the range": "$hostile.A1:$hostile.C8760", "an error cell in the range": "$hostile.E1:$hostile.G8760",
+            "1e308 in the range": "$hostile.I1:$hostile.K8760", "a million rows": "$data.A1:$data.C1000000",
+            "one row": "$data.A1:$data.C1", "a row of 1024 columns": "$data.A1:$data.AMJ1",
+        }
+        accepted = []
+        for position in range(len(arguments)):
+            for what, text in replacements.items():
+                args = list(arguments)
+                args[position] = text
+                name = "hostile %d %s" % (position, what)
+                got = self.array_formula(name[:31], "=SIM_YEAR(%s)" % "; ".join(args), 13, 8)
+                self.doc.Sheets.removeByName(name[:31])  # else every later recalculation repeats it
+                kinds = {cell[0] for row in got for cell in row}
+                where = "argument %d replaced by %s" % (position + 1, what)
+                if "error" in kinds:
+                    self.assertEqual(kinds, {"error"}, "%s: errors mixed with values" % where)
+                else:
+                    numbers = [cell[1] for row in got for cell in row if cell[0] == "number"]
+                    self.assertTrue(all(math.isfinite(x) for x in numbers), where)
+                if "error" not in kinds:
+                    accepted.append(where)
+                self.assertTrue(self.office.alive(), where)
+        # None of these is a valid year, collector or tank: every one is refused.
+        self.assertEqual(accepted, [])
 
     def test_wrong_shapes_are_errors_and_diagnosed(self):
         short = self.array_formula("short", "=SIM_YEAR($data.A1:$data.C8759; $data.D1:$data.E8759; "
