@@ -14,6 +14,7 @@ import os
 import shutil
 import subprocess
 import sys
+import time
 
 sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
 from office import Office  # noqa: E402
@@ -100,13 +101,15 @@ def missing_charts(document, pdf):
 def run(office, workbook, out_dir, expected=None, full=False):
     document = office.load(workbook)
     try:
+        started = time.monotonic()
         document.calculateAll()
+        seconds = time.monotonic() - started
         stem = os.path.splitext(os.path.basename(workbook))[0]
         pdf_in_office = os.path.join(office.own_path("pdf"), stem + ".pdf")
         office.store(document, pdf_in_office, "calc_pdf_Export")
         pdf = os.path.join(out_dir, stem + ".pdf")
         shutil.copyfile(pdf_in_office, pdf)
-        print("%s -> %s" % (workbook, pdf))
+        print("%s -> %s (recalculated in %.2f s)" % (workbook, pdf, seconds))
         print("  %-32s %d" % ("charts", len(chart_titles(document))))
         for name, shown, unit in key_results(document):
             print("  %-32s %s %s" % (name, shown, unit))
