@@ -42,10 +42,8 @@ import datetime
 import math
 import random
 
-from com.sun.star.table import CellRangeAddress
-
 import scenario as sc
-from workbook import (BOLD, CAUTIONS, HEADING_COLOUR, RESULT_COLOUR, ROW_HEIGHT, Column, Sheet,
+from workbook import (BOLD, CAUTIONS, HEADING_COLOUR, RESULT_COLOUR, ROW_HEIGHT, Column, Sheet, cell_range,
                       column_letter)
 
 FILE = "hourly-year.fods"
@@ -214,13 +212,6 @@ def page_style(document, name, landscape):
     style.HeaderIsOn = False
     style.FooterIsOn = False
     return name
-
-
-def cell_range(sheet, first_column, first_row, last_column, last_row):
-    area = CellRangeAddress()
-    area.Sheet = sheet.RangeAddress.Sheet
-    area.StartColumn, area.StartRow, area.EndColumn, area.EndRow = first_column, first_row, last_column, last_row
-    return area
 
 
 def on_report(report, key):

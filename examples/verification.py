@@ -17,7 +17,7 @@ import math
 import os
 import re
 
-from workbook import FAIL_COLOUR, INPUT_COLOUR, RESULT_COLOUR, Sheet
+from workbook import FAIL_COLOUR, INPUT_COLOUR, RESULT_COLOUR, Sheet, cell_range
 
 FILE = "verification.fods"
 ROOT = os.path.join(os.path.dirname(os.path.abspath(__file__)), "..")
@@ -292,11 +292,7 @@ def build(document):
     _formats(s, first, last)
     document.calculateAll()
     sheet.setPrintTitleRows(True)  # the header row repeats on every printed page
-    from com.sun.star.table import CellRangeAddress
-    titles = CellRangeAddress()
-    titles.Sheet = sheet.RangeAddress.Sheet
-    titles.StartRow = titles.EndRow = header_row
-    sheet.setTitleRows(titles)
+    sheet.setTitleRows(cell_range(sheet, 0, header_row, 0, header_row))
     s.row = last + 1
     s.notes([
         "Sources marked 'from memory' are values recalled from the handbooks named; a reviewer with the books "

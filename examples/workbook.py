@@ -51,6 +51,14 @@ def column_letter(index):
     return letters
 
 
+def cell_range(sheet, first_column, first_row, last_column, last_row):
+    """The address of a block of cells on `sheet` (0-based, inclusive), as print areas and charts take it."""
+    area = CellRangeAddress()
+    area.Sheet = sheet.RangeAddress.Sheet
+    area.StartColumn, area.StartRow, area.EndColumn, area.EndRow = first_column, first_row, last_column, last_row
+    return area
+
+
 class Column:
     """A table column: a header, a unit, and either input values or a formula template."""
 
@@ -310,15 +318,10 @@ class Sheet:
         """A chart below the current row over table columns: "xy" (lines through points, x numeric),
         "column" (bars per category of x) or "line" (categories of x). Series are named by the
         column headers."""
-        keys = [x_key] + list(y_keys)
         ranges = []
-        for key in keys:
+        for key in [x_key] + list(y_keys):
             column, first, last = self.columns[key]
-            address = CellRangeAddress()
-            address.Sheet = self.sheet.RangeAddress.Sheet
-            address.StartColumn = address.EndColumn = column
-            address.StartRow, address.EndRow = first - 1, last  # with the header row: series names
-            ranges.append(address)
+            ranges.append(cell_range(self.sheet, column, first - 1, column, last))  # header row: series names
         top = self._cell(first_column).Position
         right = self._cell(last_column + 1).Position
         area = Rectangle()
