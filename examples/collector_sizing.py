@@ -6,7 +6,7 @@ invented here.
 from scenario import (A1, A2, ALBEDO, AZIMUTH, B0, CLIENT, DAILY_DRAW_LITRES, DAYS_IN_MONTH, ETA0, FLOW_PER_M2,
                       H_HORIZONTAL_MJ, LATITUDE, MODULE_AREA, MODULES, MONTHS, SCENARIO, T_AMBIENT_MEAN, T_MAINS,
                       T_SET, TANK_VOLUME, TILT)
-from workbook import CAUTIONS, ROW_HEIGHT, Column, Sheet, column_letter, mark_point
+from workbook import CAUTIONS, ROW_HEIGHT, Column, Sheet, mark_point
 
 FILE = "collector-sizing.fods"
 
@@ -14,63 +14,10 @@ NARROW = 2100               # 1/100 mm: table columns right of the note column
 SIZE_OPTIONS = [3, 6, 9, 12, 15, 18]   # modules per option; 2.0 m³ keeps them all within 37.5..300 l/m²
 
 
-class SizingSheet(Sheet):
-    """Sheet with two additions this workbook needs (candidates for workbook.py):
-
-    - tables of one group line up row by row: inside a table of group "months", {key} of a column of any
-      other "months" table names the cell of the same month, not the whole range;
-    - a column's formula may be a function of the row's offset in its table, returning the template
-      (for formulas that differ per row, e.g. the n-th column of a grid).
-    """
-
-    def __init__(self, document, sheet):
-        super().__init__(document, sheet)
-        self.groups = {}    # column key -> group name
-
-    def group_table(self, group, columns, rows, header_lines=3):
-        for column in columns:
-            self.groups[column.key] = group
-        header_row = self.row
-        first, last = self.table(columns, rows)
-        self.sheet.Rows.getByIndex(header_row).Height = header_lines * ROW_HEIGHT
-        return first, last
-
-    def _current(self, row):
-        """(group, offset) of the table being written at `row`, or (None, None)."""
-        for key, (column, first, last) in self.columns.items():
-            if first <= row <= last:
-                return self.groups.get(key), row - first
-        return None, None
-
-    def expand(self, template, row=None):
-        group, offset = (None, None) if row is None else self._current(row)
-        if callable(template):
-            template = template(offset)
-        names = dict(self.cells)
-        for key, (column, first, last) in self.columns.items():
-            if row is not None and first <= row <= last:
-                names[key] = "%s%d" % (column_letter(column), row + 1)
-            elif group is not None and self.groups.get(key) == group:
-                names[key] = "%s%d" % (column_letter(column), first + offset + 1)
-            else:
-                names[key] = self.range(key)
-        return template.format(**names)
-
-    def cell_of(self, key, offset):
-        """Absolute address of the offset-th cell of a table column."""
-        column, first, last = self.columns[key]
-        return self._absolute(column, first + offset)
-
-    def header_formula(self, key, formula):
-        """Replaces a table column's header text with a formula (e.g. one naming the option's area)."""
-        column, first, last = self.columns[key]
-        self.sheet.getCellByPosition(column, first - 1).setFormula("=" + self.expand(formula))
-
-
 def build(document):
     sheet = document.Sheets.getByIndex(0)
     sheet.Name = "Collector sizing"
-    s = SizingSheet(document, sheet)
+    s = Sheet(document, sheet)
     s.title("Collector sizing – %s (invented)" % CLIENT, SCENARIO)
 
     # -- 1 -------------------------------------------------------------------------------------------------
@@ -89,7 +36,7 @@ def build(document):
            "tilted plane (diffuse share from the monthly clearness by Erbs et al., beam by Klein's Rb on the "
            "month's mean day, isotropic sky and ground). The function works in J/m² per day: H in MJ is "
            "multiplied by 1E6 going in and H_T divided by 1E6 coming out. All climate figures are invented.")
-    s.group_table("months", [
+    s.table([
         Column("month", "Month", "", values=MONTHS),
         Column("month_no", "Month no.", "–", values=list(range(1, 13)), number_format="0"),
         Column("days", "Days", "d", values=DAYS_IN_MONTH, number_format="0"),
@@ -99,7 +46,7 @@ def build(document):
         Column("ht", "H_T, tilted", "MJ/(m²·day)",
                formula="SUN_MONTHLY_TILTED({h}*1E6;{latitude};{month_no};{tilt};{azimuth};{albedo})/1E6",
                number_format="0.00", width=NARROW),
-    ], 12)
+    ], 12, group="months", header_lines=3)
     s.result("annual_horizontal", "Annual irradiation, horizontal", "SUMPRODUCT({h};{days})/3.6", "kWh/m²",
              "Σ H·days; 3.6 MJ = 1 kWh", number_format="0")
     s.result("annual_tilted_irradiation", "Annual irradiation on the collector plane",
@@ -120,14 +67,14 @@ def build(document):
     s.input("t_set", "Delivery set-point", T_SET, "°C", "invented; see the Legionella note")
     s.result("rho_set", "Density of water at the set-point", "WATER_DENSITY({t_set})", "kg/m³", "IAPWS-IF97",
              number_format="0.0")
-    s.group_table("months", [
+    s.table([
         Column("month_load", "Month", "", formula="{month}"),
         Column("volume", "Cold water, month", "m³",
                formula="{draw}/1000*{days}*{rho_set}/WATER_DENSITY({t_mains})", number_format="0.00"),
         Column("load", "Load L", "GJ", formula="STORE_WATER({volume};{t_mains};{t_set})/1E9",
                number_format="0.000"),
         Column("load_kwh", "Load L", "kWh", formula="{load}*1E9/3.6E6", number_format="0"),
-    ], 12)
+    ], 12, group="months", header_lines=3)
     s.result("annual_load", "Annual hot-water load", "SUM({load})", "GJ", "Σ of the months", number_format="0.00",
              named=True)
     s.result("annual_load_mwh", "Annual hot-water load", "{annual_load}/3.6", "MWh", "1 MWh = 3.6 GJ",
@@ -209,7 +156,7 @@ def build(document):
            "Y = FCHART_Y(area; F_R′(τα)_n; (τα)‾/(τα)_n; H_T; days; L), with L and H_T converted to J "
            "(GJ·1E9, MJ·1E6). FCHART_DHW_CORR holds for mains 5..20 °C and set-point 50..70 °C; FCHART_F for "
            "0 ≤ X ≤ 18 and 0 ≤ Y ≤ 3. The solar contribution of the month is f·L.")
-    s.group_table("months", [
+    s.table([
         Column("month_f", "Month", "", formula="{month}"),
         Column("dhw_corr", "DHW correction of X", "–", formula="FCHART_DHW_CORR({t_mains};{t_set};{t_amb})",
                number_format="0.000"),
@@ -221,7 +168,7 @@ def build(document):
         Column("f", "Solar fraction f", "–", formula="FCHART_F({x};{y})", number_format="0.000", width=NARROW),
         Column("load_f", "Load L", "GJ", formula="{load}", number_format="0.000", width=NARROW),
         Column("solar", "Solar f·L", "GJ", formula="{f}*{load}", number_format="0.000", width=NARROW),
-    ], 12)
+    ], 12, group="months", header_lines=3)
     s.result("range_check", "All months within the ranges of the f-chart?",
              'IF(AND(MIN({x})>=0;MAX({x})<=18;MIN({y})>=0;MAX({y})<=3;MIN({t_mains})>=5;MAX({t_mains})<=20;'
              '{t_set}>=50;{t_set}<=70);"yes";"NO – see the ranges above")', "", "X, Y, mains and set-point")
@@ -242,13 +189,13 @@ def build(document):
     s.note("Method: the chain of section 5 repeated for other field sizes with the same store, so both the area "
            "and the storage correction change. The options must keep the storage per m² within 37.5..300 l/m²: "
            "with the scenario's 2.0 m³ store that is 3 to 22 modules. Include the proposed count to see it marked.")
-    s.group_table("options", [
+    s.table([
         Column("opt_modules", "Modules", "–", values=SIZE_OPTIONS, number_format="0"),
         Column("opt_area", "Area", "m²", formula="{opt_modules}*{module_area}", number_format="0.00"),
         Column("opt_storage", "Storage per m²", "l/m²", formula="{tank}*1000/{opt_area}", number_format="0.0"),
         Column("opt_corr", "Storage corr. of X", "–", formula="FCHART_STORAGE_CORR({opt_storage})",
                number_format="0.000"),
-    ], len(SIZE_OPTIONS))
+    ], len(SIZE_OPTIONS), group="options", header_lines=3)
     s.note("Monthly solar fraction f of each option (columns) – the same formulas as in section 5 with the "
            "option's area and storage correction.")
     grid = []
@@ -259,11 +206,12 @@ def build(document):
             formula="FCHART_F(FCHART_X(%s;{frp_ul};{t_amb};{days};{load}*1E9)*%s*{dhw_corr};"
                     "FCHART_Y(%s;{frp_ta};{ta_ratio};{ht}*1E6;{days};{load}*1E9))" % (area, corr, area),
             number_format="0.000", width=NARROW if j + 1 >= 4 else None))
-    s.group_table("months", [Column("month_grid", "Month", "", formula="{month}")] + grid, 12)
+    s.table([Column("month_grid", "Month", "", formula="{month}")] + grid, 12, group="months",
+            header_lines=3)
     for j in range(len(SIZE_OPTIONS)):
         s.header_formula("grid%d" % j, '"f at "&TEXT(%s;"0.0")&" m²"' % s.cell_of("opt_area", j))
     s.space()
-    s.group_table("options", [
+    s.table([
         Column("opt_area_again", "Area", "m²", formula="{opt_area}", number_format="0.00"),
         Column("opt_fraction", "Annual solar fraction", "–",
                formula=lambda j: "SUMPRODUCT({grid%d};{load})/{annual_load}" % j, number_format="0.000"),
@@ -272,7 +220,7 @@ def build(document):
         Column("opt_mark", "Proposed field", "", formula='IF({opt_modules}={modules};"◄ proposed";"")'),
         Column("opt_proposed", "Proposed field", "–",
                formula='IF({opt_modules}={modules};{opt_fraction};"")', number_format="0.000", width=NARROW),
-    ], len(SIZE_OPTIONS))
+    ], len(SIZE_OPTIONS), group="options", header_lines=3)
     chart = s.chart("fraction_area", "Annual solar fraction against collector area, same store",
                     "opt_area_again", ["opt_fraction", "opt_proposed"], "Collector area [m²]",
                     "Annual solar fraction [–]", height_rows=16)

@@ -13,25 +13,6 @@ J_PER_KWH = "3.6E6"
 
 
 # -- local helpers (candidates for workbook.py) ------------------------------------------------------
-def linked_table(s, columns, rows, source_key):
-    """As Sheet.table, for a second table that continues another one row by row: inside its formulas
-    {key} of a column of the source table (the table holding `source_key`) names the cell of the same
-    row index there (row i here <-> row i there), so a wide table can be split into narrow ones."""
-    _, source_first, _ = s.columns[source_key]
-    linked = {key: (column, first) for key, (column, first, last) in s.columns.items() if first == source_first}
-    first, last = s.table(columns, rows)
-    for offset, column in enumerate(columns):
-        if column.formula is None:
-            continue
-        for i in range(rows):
-            template = column.formula
-            for key, (source_column, source_row) in linked.items():
-                template = template.replace("{%s}" % key, "%s%d" % (column_letter(source_column),
-                                                                   source_row + i + 1))
-            s._cell(offset, first + i).setFormula("=" + s.expand(template, first + i))
-    return first, last
-
-
 def runs_table(s, names, rows, header="Run"):
     """A table turned on its side: one column per item (names, in columns B, C, ...), one row per
     quantity, so several pipe runs fit the four columns of the sheet. Each row is
@@ -296,15 +277,15 @@ def build(document):
              Column("pcm_m3", "PCM", "kWh/m³", formula="STORE_PCM({pcm_density};{pcm_cp_solid};"
                     "{pcm_cp_liquid};{pcm_melt};{pcm_latent};{t_low};{t_hot})/" + J_PER_KWH, number_format="0.0"),
              Column("ratio_m3", "PCM ÷ water, per m³", "–", formula="{pcm_m3}/{water_m3}",
-                    number_format="0.00")], 10)
-    linked_table(s, [
+                    number_format="0.00")], 10, group="swings")
+    s.table([
         Column("t_low_kg", "Discharged to", "°C", formula="{t_low}", number_format="0"),
         Column("water_kg", "Water", "Wh/kg", formula="-STORE_WATER(1;{t_hot};{t_low})/WATER_DENSITY({t_hot})/3600",
                number_format="0.0"),
         Column("pcm_kg", "PCM", "Wh/kg", formula="STORE_PCM(1;{pcm_cp_solid};{pcm_cp_liquid};"
                "{pcm_melt};{pcm_latent};{t_low};{t_hot})/3600", number_format="0.0"),
         Column("ratio_kg", "PCM ÷ water, per kg", "–", formula="{pcm_kg}/{water_kg}", number_format="0.00")],
-        10, "t_low")
+        10, group="swings")
     s.chart("pcm_vs_water", "Heat stored per m³, charged at the store's charged temperature", "t_low",
             ["water_m3", "pcm_m3"], "discharged to [°C]", "energy [kWh/m³]", height_rows=16)
     s.keep(pcm_block)

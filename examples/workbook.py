@@ -4,9 +4,13 @@ are filled with formulas, charts over those columns, and the cautions block.
 
 Formula templates name other cells by key in braces:
   {key}  a single input or result  -> its absolute address, e.g. $B$7
-  {col}  a table column            -> inside that table's rows: the cell of the
-                                      same row; anywhere else: the column's
-                                      whole range, e.g. $C$12:$C$23
+  {col}  a table column            -> inside that table's rows, or in a table
+                                      of the same group (tables that line up
+                                      row by row, e.g. "months"): the cell of
+                                      the same row; anywhere else: the
+                                      column's whole range, e.g. $C$12:$C$23
+A column's formula may also be a function of the row's offset in its table
+that returns the template (for formulas that differ from row to row).
 Every workbook uses the same colours, so inputs, results and notes are told
 apart at a glance.
 """
@@ -80,6 +84,7 @@ class Sheet:
         self.columns = {}   # key -> (column index, first row, last row), 0-based
         self.widths = widths
         self.blocks = []    # (first, last) rows to keep on one printed page
+        self.groups = {}    # table column key -> its group: tables of a group line up row by row
         for column, width in enumerate(widths):
             sheet.Columns.getByIndex(column).Width = width  # 1/100 mm
         page = document.StyleFamilies.getByName("PageStyles").getByName(sheet.PageStyle)
@@ -97,12 +102,29 @@ class Sheet:
         column, first, last = self.columns[key]
         return "%s:%s" % (self._absolute(column, first), self._absolute(column, last))
 
+    def cell_of(self, key, offset):
+        """Absolute address of the offset-th cell of a table column."""
+        column, first, last = self.columns[key]
+        return self._absolute(column, first + offset)
+
+    def _table_at(self, row):
+        """(group, offset) of the table being written at `row`, or (None, None)."""
+        for key, (column, first, last) in self.columns.items():
+            if first <= row <= last:
+                return self.groups.get(key), row - first
+        return None, None
+
     def expand(self, template, row=None):
         """The template with {key} replaced by addresses; `row` is the table row being written, if any."""
+        group, offset = (None, None) if row is None else self._table_at(row)
+        if callable(template):
+            template = template(offset)
         names = dict(self.cells)
         for key, (column, first, last) in self.columns.items():
             if row is not None and first <= row <= last:
                 names[key] = "%s%d" % (column_letter(column), row + 1)
+            elif group is not None and self.groups.get(key) == group:
+                names[key] = "%s%d" % (column_letter(column), first + offset + 1)
             else:
                 names[key] = self.range(key)
         return template.format(**names)
@@ -233,11 +255,16 @@ class Sheet:
                 self.sheet.Columns.getByIndex(index).Width = column.width
         self.sheet.Rows.getByIndex(first - 1).Height = 2 * ROW_HEIGHT
 
-    def table(self, columns, rows, first_column=0):
+    def table(self, columns, rows, first_column=0, group=None, header_lines=2):
         """A table of `rows` rows under a header row "header [unit]". Input columns are yellow, formula
-        columns green (for thousands of rows see array_columns). Returns the 0-based (first, last) data rows."""
+        columns green (for thousands of rows see array_columns). Tables of one `group` line up row by row
+        (see the module text). Returns the 0-based (first, last) data rows."""
         first, last = self.row + 1, self.row + rows
+        for column in columns:
+            if group is not None:
+                self.groups[column.key] = group
         self._header_row(columns, first_column, first, last)
+        self.sheet.Rows.getByIndex(first - 1).Height = header_lines * ROW_HEIGHT
         for offset, column in enumerate(columns):
             index = first_column + offset
             block = self.sheet.getCellRangeByPosition(index, first, index, last)
@@ -252,6 +279,11 @@ class Sheet:
             block.NumberFormat = self.number_format(column.number_format)
         self.row = last + 1
         return first, last
+
+    def header_formula(self, key, formula):
+        """Replaces a table column's header text with a formula (e.g. one naming an option's area)."""
+        column, first, last = self.columns[key]
+        self._cell(column, first - 1).setFormula("=" + self.expand(formula))
 
     def labels(self, key, header, values, column, first_row):
         """A column of row labels (not inputs: heading colour) under a header, usable as a table column."""
